@@ -1,0 +1,117 @@
+/**
+ * The documented types of the language layer's facade (`./index.ts`).
+ *
+ * Everything here is plain data: offsets into the document text (UTF-16 code
+ * units, as JavaScript strings count them), never line/column pairs. Lines and
+ * columns appear only at the edges (the LSP conversion module and the CLI).
+ */
+
+/** A half-open range [start, end) of UTF-16 offsets into the document. */
+export interface Span {
+  start: number;
+  end: number;
+}
+
+export type Severity = 'error' | 'warning' | 'information';
+
+/**
+ * A problem found in a document. `code` is stable across releases (tests and
+ * users may rely on it); `message` is for people and may change.
+ *
+ * Code bands: `syntax/…`, `name/…`, `type/…`, `math/…`, `claim/…`, `limit/…`.
+ */
+export interface Problem {
+  code: string;
+  severity: Severity;
+  message: string;
+  span: Span;
+  /** Other places involved, e.g. the declaration of a vector that turned out dependent. */
+  related?: RelatedSpan[];
+}
+
+export interface RelatedSpan {
+  span: Span;
+  message: string;
+}
+
+/** How a projective point (a Plücker vector) is scaled for display. */
+export type Normalization = 'raw' | 'first-one' | 'primitive';
+
+export interface AnalyzeOptions {
+  /**
+   * `false`: lex, parse and resolve names only (cheap, for every keystroke).
+   * `true`: evaluate everything, check claims.
+   */
+  evaluate: boolean;
+  /** Default normalization; a `normalize` statement in the file overrides it. */
+  normalization?: Normalization;
+  /** Bounds that turn a runaway computation into a `limit/…` problem. */
+  limits?: Partial<Limits>;
+}
+
+export interface Limits {
+  /** Largest number of Plücker coordinates (C(n,k)) computed for one subspace. */
+  maxCoordinates: number;
+  /** Largest ambient dimension of a declared space. */
+  maxDimension: number;
+}
+
+export const DEFAULT_LIMITS: Limits = {
+  maxCoordinates: 200_000,
+  maxDimension: 64,
+};
+
+/** What kind of thing a name or a shown expression denotes. */
+export type ResultKind =
+  | 'field'
+  | 'space'
+  | 'vector'
+  | 'subspace'
+  | 'multivector'
+  | 'scalar'
+  | 'claim'
+  | 'show';
+
+/**
+ * One computed result: a declaration's value, a claim's verdict or a shown value.
+ * The text forms are ready to display; `json` is exact (rationals as strings).
+ */
+export interface Result {
+  kind: ResultKind;
+  /** The declared name, when the statement declares one. */
+  name?: string;
+  /** The whole statement. */
+  span: Span;
+  /** The span a hover on this result answers to (the name, or the keyword of a claim/show). */
+  anchor: Span;
+  /** One line for a code lens. */
+  summary: string;
+  /** Markdown for a hover; always states the convention used. */
+  hover: string;
+  /** The result typeset in LaTeX, for "copy as LaTeX". */
+  latex: string;
+  /** Exact machine-readable form (documented in docs/cli-json.md). */
+  json: Record<string, unknown>;
+}
+
+/** What `analyze` returns. It never throws on user input. */
+export interface Analysis {
+  text: string;
+  problems: Problem[];
+  results: Result[];
+  /** Whether the evaluation step ran (see `AnalyzeOptions.evaluate`). */
+  evaluated: boolean;
+}
+
+export interface Hover {
+  span: Span;
+  markdown: string;
+}
+
+export interface Lens {
+  span: Span;
+  title: string;
+  latex: string;
+  /** The name of the result, if any, for commands that refer to it. */
+  name?: string;
+}
