@@ -1,18 +1,58 @@
 /**
  * The language layer's one facade. The LSP server and the CLI use only this.
  * Nothing here throws on user input: problems come back as data.
+ *
+ * The pipeline: parse (syntax problems) → resolve names (name problems, and
+ * the references a hover on a use needs) → evaluate, when asked (results,
+ * type, math and claim problems).
  */
-import type { Analysis, AnalyzeOptions, Hover, Lens } from './types.js';
+import { parseProgram } from './parse.js';
+import { evaluateProgram } from './program.js';
+import { resolveNames } from './scope.js';
+import { DEFAULT_LIMITS, type Analysis, type AnalyzeOptions, type Hover, type Lens, type Problem } from './types.js';
 
 export * from './types.js';
 
 export function analyze(text: string, options: AnalyzeOptions): Analysis {
-  // Placeholder until the pipeline (parse → resolve → evaluate) is wired in.
-  void options;
-  return { text, problems: [], results: [], evaluated: false };
+  try {
+    const { program, problems: syntax } = parseProgram(text);
+    const resolution = resolveNames(program);
+    const references = resolution.references.map((r) => ({
+      span: r.span,
+      name: r.target.name,
+      kind: r.target.kind,
+      ...(r.target.space !== undefined ? { space: r.target.space } : {}),
+    }));
+    const problems: Problem[] = [...syntax, ...resolution.problems];
+    if (!options.evaluate) return { text, problems: sortProblems(problems), results: [], references, evaluated: false };
+    const outcome = evaluateProgram(program, text, {
+      normalization: options.normalization ?? 'primitive',
+      limits: { ...DEFAULT_LIMITS, ...options.limits },
+    });
+    // Name resolution already reported unknown names; evaluation stays silent on them.
+    problems.push(...outcome.problems);
+    return { text, problems: sortProblems(problems), results: outcome.results, references, evaluated: true };
+  } catch (err) {
+    // A defect of ours must not take the editor down: report it on the whole text.
+    const message = err instanceof Error ? err.message : String(err);
+    return {
+      text,
+      problems: [{ code: 'internal/error', severity: 'error', message: `internal error (please report it): ${message}`, span: { start: 0, end: text.length } }],
+      results: [],
+      references: [],
+      evaluated: false,
+    };
+  }
 }
 
-/** The hover for the innermost result whose anchor contains `offset`. */
+function sortProblems(problems: Problem[]): Problem[] {
+  return problems.sort((a, b) => a.span.start - b.span.start || a.span.end - b.span.end);
+}
+
+/**
+ * The hover at `offset`: the innermost result whose anchor contains it, else
+ * the declaration a name used there refers to.
+ */
 export function hoverAt(analysis: Analysis, offset: number): Hover | undefined {
   let best: Hover | undefined;
   for (const r of analysis.results) {
@@ -22,12 +62,24 @@ export function hoverAt(analysis: Analysis, offset: number): Hover | undefined {
       }
     }
   }
-  return best;
+  if (best) return best;
+  const ref = analysis.references.find((r) => r.span.start <= offset && offset <= r.span.end);
+  if (!ref) return undefined;
+  if (ref.kind === 'basis') {
+    return { span: ref.span, markdown: `**basis vector ${ref.name}** of ${ref.space}` };
+  }
+  const target = analysis.results.find((r) => r.name === ref.name && r.kind !== 'claim' && r.kind !== 'show');
+  return target ? { span: ref.span, markdown: target.hover } : undefined;
 }
 
-/** One lens per result, above its statement. */
+/** One lens per result, above its statement (a show line has one, not two). */
 export function lensesFor(analysis: Analysis): Lens[] {
-  return analysis.results
-    .filter((r) => r.kind !== 'field')
-    .map((r) => ({ span: r.span, title: r.summary, latex: r.latex, name: r.name }));
+  const seen = new Set<number>();
+  const lenses: Lens[] = [];
+  for (const r of analysis.results) {
+    if (r.kind === 'field' || seen.has(r.span.start)) continue;
+    seen.add(r.span.start);
+    lenses.push({ span: r.span, title: r.summary, latex: r.latex, ...(r.name !== undefined ? { name: r.name } : {}) });
+  }
+  return lenses;
 }

@@ -101,6 +101,17 @@ export interface Analysis {
   results: Result[];
   /** Whether the evaluation step ran (see `AnalyzeOptions.evaluate`). */
   evaluated: boolean;
+  /** Every use of a declared name, so a hover on a use can show the declaration's result. */
+  references: NameUse[];
+}
+
+/** A use of a name, resolved to what it names. */
+export interface NameUse {
+  span: Span;
+  name: string;
+  kind: 'space' | 'basis' | 'vector' | 'subspace' | 'multivector';
+  /** For a basis vector: the space it belongs to. */
+  space?: string;
 }
 
 export interface Hover {

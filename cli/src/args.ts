@@ -1,0 +1,86 @@
+/**
+ * The command line, parsed into what to do. Bad input raises UsageError,
+ * which the caller turns into exit status 2.
+ */
+import type { Normalization } from '../../server/src/language/index.js';
+
+export const NORMALIZATIONS: readonly Normalization[] = ['raw', 'first-one', 'primitive'];
+
+/** The normalization used when neither the command line nor the file chooses one (as in the editor). */
+export const DEFAULT_NORMALIZATION: Normalization = 'primitive';
+
+export type Command =
+  | { kind: 'help' }
+  | { kind: 'version' }
+  | { kind: 'check'; files: string[]; json: boolean; normalization: Normalization };
+
+export class UsageError extends Error {}
+
+export const USAGE = `Usage:
+  wedgework check FILE... [--json] [--normalization raw|first-one|primitive]
+  wedgework --help
+  wedgework --version
+
+Checks .wedge files: parses them, evaluates every statement and checks every
+claim. Files are only read, never written.
+
+Options:
+  --json             print one JSON document instead of lines (see docs/cli-json.md)
+  --normalization M  how projective points are scaled when the file has no
+                     \`normalize\` statement: raw, first-one or primitive
+                     (default: ${DEFAULT_NORMALIZATION})
+  --                 treat every later argument as a file name
+  -h, --help         print this help
+  -v, --version      print the version
+
+Problems are printed as FILE:LINE:COLUMN: SEVERITY CODE: MESSAGE (line and
+column start at 1; columns count characters).
+
+Exit status: 0 when no error was found, 1 when some file has an error,
+2 on a usage error or when a file cannot be read, 70 on an internal error.
+`;
+
+function parseNormalization(value: string | undefined): Normalization {
+  if (value === undefined || value === '') {
+    throw new UsageError('--normalization needs a value: raw, first-one or primitive');
+  }
+  if (!(NORMALIZATIONS as readonly string[]).includes(value)) {
+    throw new UsageError(`unknown normalization '${value}' (choose raw, first-one or primitive)`);
+  }
+  return value as Normalization;
+}
+
+export function parseArgs(args: readonly string[]): Command {
+  if (args.length === 0) throw new UsageError('no command given');
+  const [command, ...rest] = args;
+  if (command === '--help' || command === '-h' || command === 'help') return { kind: 'help' };
+  if (command === '--version' || command === '-v') return { kind: 'version' };
+  if (command !== 'check') {
+    throw new UsageError(command!.startsWith('-') ? `unknown option '${command}'` : `unknown command '${command}'`);
+  }
+
+  const files: string[] = [];
+  let json = false;
+  let normalization = DEFAULT_NORMALIZATION;
+  let optionsEnded = false;
+  for (let i = 0; i < rest.length; i++) {
+    const arg = rest[i]!;
+    if (optionsEnded || !arg.startsWith('-') || arg === '-') {
+      files.push(arg);
+    } else if (arg === '--') {
+      optionsEnded = true;
+    } else if (arg === '--help' || arg === '-h') {
+      return { kind: 'help' };
+    } else if (arg === '--json') {
+      json = true;
+    } else if (arg === '--normalization') {
+      normalization = parseNormalization(rest[++i]);
+    } else if (arg.startsWith('--normalization=')) {
+      normalization = parseNormalization(arg.slice('--normalization='.length));
+    } else {
+      throw new UsageError(`unknown option '${arg}'`);
+    }
+  }
+  if (files.length === 0) throw new UsageError('check needs at least one FILE');
+  return { kind: 'check', files, json, normalization };
+}

@@ -1,0 +1,17 @@
+/**
+ * The engine's public API: exact scalars, linear algebra, exterior algebra and
+ * Grassmannians. The language layer and the command line import from here.
+ */
+export * from './field.js';
+export * from './rational.js';
+export * from './primes.js';
+export * from './prime-field.js';
+export * from './fields.js';
+export * from './matrix.js';
+export * from './subsets.js';
+export * from './multivector.js';
+export * from './plucker.js';
+export * from './normalize.js';
+export * from './decompose.js';
+export * from './chart.js';
+export * from './grassmannian.js';

@@ -1,0 +1,494 @@
+/**
+ * Turns the concrete syntax tree of one statement (from `./parser.ts`) into
+ * the AST of `./ast.ts`, with spans.
+ *
+ * Chevrotain's offsets are inclusive at both ends; our spans are half-open, so
+ * a token spans `[startOffset, endOffset + 1)`. Parentheses do not appear in
+ * the AST (`(x)` is just `x`), but they do count in the span of the enclosing
+ * node, so every expression builder returns the node together with its
+ * `extent`: the source range including any parentheses around it.
+ *
+ * The shape checks that the grammar cannot express are made here: a bracket
+ * that mixes `:` with other separators (`syntax/mixed-separators`), and index
+ * keys that are not label lists (`syntax/bad-index-key`). A statement with such
+ * a problem is not returned. The builder never throws: a missing child or a
+ * token without a real position (which the parser's settings rule out, but a
+ * defensive builder does not rely on that) makes it drop the statement.
+ */
+import type { CstElement, CstNode, IToken } from 'chevrotain';
+import type {
+  Binary, DeclStmt, Entry, Expr, Ident, IndexKey, IndexMapLit, MatrixLit, PointLit, Relation, Statement,
+} from './ast.js';
+import type { Problem, Span } from './types.js';
+import * as T from './tokens.js';
+
+/** Raised inside the builder when the tree lacks something; caught per statement. */
+class Incomplete extends Error {}
+
+/** Raised after a shape problem has been recorded; the statement is dropped. */
+class Rejected extends Error {}
+
+interface Built<E extends Expr = Expr> {
+  node: E;
+  extent: Span;
+}
+
+export interface BuiltStatement {
+  /** Undefined when the statement was dropped (a problem says why, unless the tree was incomplete). */
+  statement: Statement | undefined;
+  problems: Problem[];
+}
+
+function isToken(element: CstElement): element is IToken {
+  return (element as IToken).tokenType !== undefined;
+}
+
+function isRealToken(token: IToken): boolean {
+  return !token.isInsertedInRecovery && Number.isFinite(token.startOffset) && Number.isFinite(token.endOffset);
+}
+
+export function tokenSpan(token: IToken): Span {
+  return { start: token.startOffset, end: token.endOffset! + 1 };
+}
+
+function join(a: Span, b: Span): Span {
+  return { start: Math.min(a.start, b.start), end: Math.max(a.end, b.end) };
+}
+
+/** The source range of a CST node: from its first to its last real token. */
+function extentOf(node: CstNode): Span | undefined {
+  let result: Span | undefined;
+  for (const elements of Object.values(node.children)) {
+    for (const element of elements) {
+      const span = isToken(element) ? (isRealToken(element) ? tokenSpan(element) : undefined) : extentOf(element);
+      if (span) result = result ? join(result, span) : span;
+    }
+  }
+  return result;
+}
+
+function tokens(node: CstNode, label: string): IToken[] {
+  const found = node.children[label] ?? [];
+  const result: IToken[] = [];
+  for (const element of found) {
+    if (!isToken(element) || !isRealToken(element)) throw new Incomplete();
+    result.push(element);
+  }
+  return result;
+}
+
+function optionalToken(node: CstNode, label: string): IToken | undefined {
+  return tokens(node, label)[0];
+}
+
+function token(node: CstNode, label: string): IToken {
+  const found = optionalToken(node, label);
+  if (!found) throw new Incomplete();
+  return found;
+}
+
+function nodes(node: CstNode, label: string): CstNode[] {
+  const found = node.children[label] ?? [];
+  const result: CstNode[] = [];
+  for (const element of found) {
+    if (isToken(element)) throw new Incomplete();
+    if (element.recoveredNode) throw new Incomplete();
+    result.push(element);
+  }
+  return result;
+}
+
+function optionalNode(node: CstNode, label: string): CstNode | undefined {
+  return nodes(node, label)[0];
+}
+
+function child(node: CstNode, label: string): CstNode {
+  const found = optionalNode(node, label);
+  if (!found) throw new Incomplete();
+  return found;
+}
+
+function ident(token: IToken): Ident {
+  return { span: tokenSpan(token), name: token.image };
+}
+
+function numberLit(token: IToken) {
+  return { type: 'number' as const, span: tokenSpan(token), text: token.image };
+}
+
+/** Collects the shape problems of one statement while building it. */
+class StatementBuilder {
+  readonly problems: Problem[] = [];
+
+  private reject(code: string, span: Span, message: string): never {
+    this.problems.push({ code, severity: 'error', message, span });
+    throw new Rejected();
+  }
+
+  statement(cst: CstNode): Statement {
+    const [kind] = Object.keys(cst.children);
+    const inner = kind ? child(cst, kind) : undefined;
+    if (!inner) throw new Incomplete();
+    const extent = extentOf(inner);
+    if (!extent) throw new Incomplete();
+    switch (inner.name) {
+      case 'fieldStmt': {
+        const keyword = token(inner, 'keyword');
+        const modulus = optionalToken(inner, 'modulus');
+        return {
+          type: 'field',
+          span: extent,
+          keyword: tokenSpan(keyword),
+          name: ident(token(inner, 'name')),
+          ...(modulus ? { modulus: numberLit(modulus) } : {}),
+        };
+      }
+      case 'normalizeStmt': {
+        const words = tokens(inner, 'word');
+        if (words.length === 0) throw new Incomplete();
+        const span = join(tokenSpan(words[0]!), tokenSpan(words[words.length - 1]!));
+        return {
+          type: 'normalize',
+          span: extent,
+          keyword: tokenSpan(token(inner, 'keyword')),
+          mode: { span, name: words.map((w) => w.image).join('-') },
+        };
+      }
+      case 'spaceStmt': {
+        const basis = tokens(inner, 'basis');
+        return {
+          type: 'space',
+          span: extent,
+          keyword: tokenSpan(token(inner, 'keyword')),
+          name: ident(token(inner, 'name')),
+          dim: numberLit(token(inner, 'dim')),
+          ...(basis.length > 0 ? { basis: basis.map(ident) } : {}),
+        };
+      }
+      case 'declStmt': {
+        const keyword = token(inner, 'keyword');
+        const inSpace = optionalToken(inner, 'inSpace');
+        const declKind: DeclStmt['declKind'] =
+          keyword.tokenType === T.Vector ? 'vector' : keyword.tokenType === T.Subspace ? 'subspace' : 'multivector';
+        return {
+          type: 'decl',
+          span: extent,
+          keyword: tokenSpan(keyword),
+          declKind,
+          name: ident(token(inner, 'name')),
+          value: this.expression(child(inner, 'value')).node,
+          ...(inSpace ? { inSpace: ident(inSpace) } : {}),
+        };
+      }
+      case 'claimStmt':
+        return {
+          type: 'claim',
+          span: extent,
+          keyword: tokenSpan(token(inner, 'keyword')),
+          subject: this.expression(child(inner, 'subject')).node,
+          relation: this.relation(child(inner, 'relation')),
+        };
+      case 'showStmt':
+        return {
+          type: 'show',
+          span: extent,
+          keyword: tokenSpan(token(inner, 'keyword')),
+          value: this.expression(child(inner, 'value')).node,
+        };
+      default:
+        throw new Incomplete();
+    }
+  }
+
+  private relation(node: CstNode): Relation {
+    const extent = extentOf(node);
+    if (!extent) throw new Incomplete();
+    const other = optionalNode(node, 'other');
+    const negated = optionalToken(node, 'not') !== undefined;
+    let op: Relation['op'];
+    if (optionalToken(node, 'equals')) op = '=';
+    else if (optionalToken(node, 'notEquals')) op = '!=';
+    else if (optionalToken(node, 'notIn')) op = 'not in';
+    else if (optionalToken(node, 'in')) op = negated ? 'not in' : 'in';
+    else if (optionalToken(node, 'decomposable')) op = negated ? 'not decomposable' : 'decomposable';
+    else throw new Incomplete();
+    const needsOther = op !== 'decomposable' && op !== 'not decomposable';
+    if (needsOther !== (other !== undefined)) throw new Incomplete();
+    return { span: extent, op, ...(other ? { other: this.expression(other).node } : {}) };
+  }
+
+  /** Folds `operand (op operand)*` to the left. */
+  private leftFold(
+    operands: Built[],
+    ops: IToken[],
+    opOf: (token: IToken) => Binary['op'],
+  ): Built {
+    if (operands.length !== ops.length + 1 || operands.length === 0) throw new Incomplete();
+    let result = operands[0]!;
+    ops.forEach((opToken, i) => {
+      const right = operands[i + 1]!;
+      result = this.binary(opOf(opToken), tokenSpan(opToken), result, right, false);
+    });
+    return result;
+  }
+
+  private binary(op: Binary['op'], opSpan: Span, left: Built, right: Built, implicit: boolean): Built {
+    const span = join(left.extent, right.extent);
+    const node: Binary = {
+      type: 'binary',
+      span,
+      op,
+      opSpan,
+      ...(implicit ? { implicit: true } : {}),
+      left: left.node,
+      right: right.node,
+    };
+    return { node, extent: span };
+  }
+
+  expression(node: CstNode): Built {
+    const operands = nodes(node, 'operand').map((n) => this.additive(n));
+    return this.leftFold(operands, tokens(node, 'op'), () => '&');
+  }
+
+  private additive(node: CstNode): Built {
+    const operands = nodes(node, 'operand').map((n) => this.multiplicative(n));
+    return this.leftFold(operands, tokens(node, 'op'), (t) => (t.tokenType === T.Plus ? '+' : '-'));
+  }
+
+  private multiplicative(node: CstNode): Built {
+    let result = this.unary(child(node, 'head'));
+    for (const tail of nodes(node, 'tail')) {
+      const op = optionalToken(tail, 'op');
+      if (op) {
+        const right = this.unary(child(tail, 'operand'));
+        result = this.binary(op.tokenType === T.Star ? '*' : '/', tokenSpan(op), result, right, false);
+      } else {
+        const right = this.wedge(child(tail, 'juxtaposed'));
+        const gap = { start: result.extent.end, end: right.extent.start };
+        result = this.binary('*', gap, result, right, true);
+      }
+    }
+    return result;
+  }
+
+  private unary(node: CstNode): Built {
+    const sign = optionalToken(node, 'sign');
+    const operandNode = child(node, 'operand');
+    if (!sign) return this.wedge(operandNode);
+    const operand = this.unary(operandNode);
+    const span = join(tokenSpan(sign), operand.extent);
+    return {
+      node: { type: 'unary', span, op: sign.tokenType === T.Minus ? '-' : '+', operand: operand.node },
+      extent: span,
+    };
+  }
+
+  private wedge(node: CstNode): Built {
+    const operands = nodes(node, 'operand').map((n) => this.primary(n));
+    return this.leftFold(operands, tokens(node, 'op'), () => '^');
+  }
+
+  private primary(node: CstNode): Built {
+    const number = optionalToken(node, 'number');
+    if (number) {
+      const lit = numberLit(number);
+      return { node: lit, extent: lit.span };
+    }
+    const [name] = Object.keys(node.children);
+    const inner = name ? child(node, name) : undefined;
+    if (!inner) throw new Incomplete();
+    switch (inner.name) {
+      case 'nameOrCall':
+        return this.nameOrCall(inner);
+      case 'parenthesised':
+        return this.parenthesised(inner);
+      case 'bracket': {
+        const lit = this.bracket(inner);
+        return { node: lit, extent: lit.span };
+      }
+      case 'indexMap': {
+        const lit = this.indexMap(inner);
+        return { node: lit, extent: lit.span };
+      }
+      case 'rowsExpr':
+      case 'solutionsExpr': {
+        const keyword = token(inner, 'keyword');
+        const matrix = this.matrixOnly(child(inner, 'matrix'), keyword);
+        const span = join(tokenSpan(keyword), matrix.span);
+        const type = inner.name === 'rowsExpr' ? ('rows' as const) : ('solutions' as const);
+        return { node: { type, span, keyword: tokenSpan(keyword), matrix }, extent: span };
+      }
+      case 'dimExpr': {
+        const keyword = token(inner, 'keyword');
+        const operand = this.primary(child(inner, 'operand'));
+        const span = join(tokenSpan(keyword), operand.extent);
+        return { node: { type: 'dim', span, keyword: tokenSpan(keyword), operand: operand.node }, extent: span };
+      }
+      default:
+        throw new Incomplete();
+    }
+  }
+
+  private nameOrCall(node: CstNode): Built {
+    const nameToken = token(node, 'name');
+    if (optionalToken(node, 'open')) {
+      const close = token(node, 'close');
+      const args = nodes(node, 'arg').map((n) => this.expression(n).node);
+      const span = join(tokenSpan(nameToken), tokenSpan(close));
+      return { node: { type: 'call', span, callee: ident(nameToken), args }, extent: span };
+    }
+    if (optionalToken(node, 'dot')) {
+      const member = token(node, 'member');
+      const span = join(tokenSpan(nameToken), tokenSpan(member));
+      return { node: { type: 'name', span, name: ident(member), qualifier: ident(nameToken) }, extent: span };
+    }
+    const span = tokenSpan(nameToken);
+    return { node: { type: 'name', span, name: ident(nameToken) }, extent: span };
+  }
+
+  private parenthesised(node: CstNode): Built {
+    const extent = join(tokenSpan(token(node, 'open')), tokenSpan(token(node, 'close')));
+    const items = nodes(node, 'item').map((n) => this.expression(n));
+    if (items.length === 0) throw new Incomplete();
+    if (items.length === 1) return { node: items[0]!.node, extent };
+    return { node: { type: 'tuple', span: extent, items: items.map((i) => i.node) }, extent };
+  }
+
+  private entry(node: CstNode): { entry: Entry; first: IToken; last: IToken } {
+    const sign = optionalToken(node, 'sign');
+    const numerator = token(node, 'numerator');
+    const slash = optionalToken(node, 'slash');
+    const denominator = optionalToken(node, 'denominator');
+    if ((slash === undefined) !== (denominator === undefined)) throw new Incomplete();
+    const parts = [sign, numerator, slash, denominator].filter((t): t is IToken => t !== undefined);
+    const first = parts[0]!;
+    const last = parts[parts.length - 1]!;
+    return {
+      entry: { span: join(tokenSpan(first), tokenSpan(last)), text: parts.map((t) => t.image).join('') },
+      first,
+      last,
+    };
+  }
+
+  /**
+   * A bracket literal. The first gap between entries decides the shape: `:`
+   * makes a projective point, anything else (`,`, `;` or just spaces) a
+   * matrix; a gap of the other kind later on is a mixed-separators problem,
+   * reported at that gap's separator (or at the entry after a bare gap).
+   *
+   * Matrix rows: `;` starts a new row, `,` continues the row even across a
+   * line break, and a bare gap starts a new row exactly when the next entry
+   * stands on a later line than the previous one.
+   */
+  bracket(node: CstNode): MatrixLit | PointLit {
+    const span = join(tokenSpan(token(node, 'open')), tokenSpan(token(node, 'close')));
+    const first = this.entry(child(node, 'first'));
+    const items = nodes(node, 'item').map((item) => ({
+      separator: optionalToken(item, 'separator'),
+      ...this.entry(child(item, 'entry')),
+    }));
+    const isPoint = items.length > 0 && items[0]!.separator?.tokenType === T.Colon;
+    for (const item of items) {
+      const isColon = item.separator?.tokenType === T.Colon;
+      if (isColon !== isPoint) {
+        const where = item.separator ? tokenSpan(item.separator) : item.entry.span;
+        const found = item.separator ? `'${item.separator.image}'` : 'entries separated only by spaces';
+        this.reject(
+          'syntax/mixed-separators',
+          where,
+          isPoint
+            ? `this bracket began as a projective point (entries separated by ':'), so every entry must be ` +
+                `separated by ':', found ${found}`
+            : `':' separates the coordinates of a projective point, but this bracket began as a matrix ` +
+                `(entries separated by spaces or ',', rows by ';' or new lines); use one kind of separator`,
+        );
+      }
+    }
+    if (isPoint) return { type: 'point', span, entries: [first.entry, ...items.map((i) => i.entry)] };
+    const rows: Entry[][] = [[first.entry]];
+    let previousLast = first.last;
+    for (const item of items) {
+      const kind = item.separator?.tokenType;
+      const newRow =
+        kind === T.Semicolon || (kind === undefined && (item.first.startLine ?? 0) > (previousLast.endLine ?? 0));
+      if (newRow) rows.push([item.entry]);
+      else rows[rows.length - 1]!.push(item.entry);
+      previousLast = item.last;
+    }
+    return { type: 'matrix', span, rows };
+  }
+
+  /** The bracket after `rows` or `solutions`, which must be a matrix. */
+  private matrixOnly(node: CstNode, keyword: IToken): MatrixLit {
+    const lit = this.bracket(node);
+    if (lit.type === 'matrix') return lit;
+    const colon = nodes(node, 'item').map((item) => optionalToken(item, 'separator'))[0];
+    this.reject(
+      'syntax/mixed-separators',
+      colon ? tokenSpan(colon) : lit.span,
+      `'${keyword.image}' needs a matrix (entries separated by spaces or ',', rows by ';' or new lines), ` +
+        `but ':' makes this bracket a projective point`,
+    );
+  }
+
+  private indexMap(node: CstNode): IndexMapLit {
+    const span = join(tokenSpan(token(node, 'open')), tokenSpan(token(node, 'close')));
+    const entries = nodes(node, 'item').map((item) => {
+      const key = this.indexKey(child(item, 'key'));
+      const value = this.entry(child(item, 'value')).entry;
+      return { key, value, span: join(key.span, value.span) };
+    });
+    return { type: 'indexmap', span, entries };
+  }
+
+  private indexKey(node: CstNode): IndexKey {
+    const badName = optionalToken(node, 'badName');
+    if (badName) {
+      this.reject(
+        'syntax/bad-index-key',
+        tokenSpan(badName),
+        `an index key lists basis labels, as digits (13 means labels 1 and 3) or in parentheses ` +
+          `((1, 10) for labels above 9); found the name '${badName.image}'`,
+      );
+    }
+    const digits = optionalToken(node, 'digits');
+    if (digits) {
+      if (!/^[0-9]+$/.test(digits.image)) {
+        this.reject(
+          'syntax/bad-index-key',
+          tokenSpan(digits),
+          `an index key is a string of digits, one per label (13 means labels 1 and 3), found ${digits.image}`,
+        );
+      }
+      return { span: tokenSpan(digits), labels: [...digits.image].map(Number) };
+    }
+    const open = token(node, 'open');
+    const close = token(node, 'close');
+    const labels = tokens(node, 'label');
+    if (labels.length === 0) throw new Incomplete();
+    for (const label of labels) {
+      if (!/^[0-9]+$/.test(label.image) || !Number.isSafeInteger(Number(label.image))) {
+        this.reject(
+          'syntax/bad-index-key',
+          tokenSpan(label),
+          `a label in an index key is a whole number, found ${label.image}`,
+        );
+      }
+    }
+    return { span: join(tokenSpan(open), tokenSpan(close)), labels: labels.map((l) => Number(l.image)) };
+  }
+}
+
+/** Builds one statement; never throws. */
+export function buildStatement(cst: CstNode): BuiltStatement {
+  const builder = new StatementBuilder();
+  try {
+    return { statement: builder.statement(cst), problems: builder.problems };
+  } catch (error) {
+    if (error instanceof Incomplete || error instanceof Rejected) {
+      return { statement: undefined, problems: builder.problems };
+    }
+    throw error;
+  }
+}

@@ -1,0 +1,252 @@
+/**
+ * Checking claims. A claim that holds is quiet (its lens says so); a false
+ * claim becomes an error that says what was claimed, what was found, and why.
+ */
+import { coordinatesIn, rref } from '../engine/matrix.js';
+import { equalsMV, fromVector, isZeroMV, toDense } from '../engine/multivector.js';
+import { normalizePoint, projectivelyEqual } from '../engine/normalize.js';
+import { binomial } from '../engine/subsets.js';
+import type { ClaimStmt } from './ast.js';
+import { decompositionOf, describeRelation, relationLatex } from './decomposition.js';
+import { subspacePlucker, type Environment } from './environment.js';
+import { checkCoordinateLimit, evaluate } from './expressions.js';
+import { fail } from './failure.js';
+import { matrixLatex } from './latex.js';
+import { formatCombination, formatMatrixInline, formatPoint, formatTuple } from './text.js';
+import { describeValue, type MultivectorValue, type Scalar, type SubspaceValue, type Value } from './values.js';
+
+export interface ClaimOutcome {
+  holds: boolean;
+  /** Stable code of the problem when the claim fails. */
+  code: string;
+  /** What the file claims, in its own words. */
+  claimed: string;
+  /** What was found, as a sentence. */
+  found: string;
+  /** LaTeX of the finding (e.g. the failed relation). */
+  latex: string;
+}
+
+export function checkClaim(env: Environment, source: string, s: ClaimStmt): ClaimOutcome {
+  const claimed = source.slice(s.subject.span.start, s.relation.span.end).replace(/\s+/g, ' ');
+  const subjectText = source.slice(s.subject.span.start, s.subject.span.end).replace(/\s+/g, ' ');
+  const subject = evaluate(env, s.subject, {});
+  const op = s.relation.op;
+  if (op === 'decomposable' || op === 'not decomposable') {
+    return decomposableClaim(env, subject, subjectText, claimed, op === 'decomposable', s);
+  }
+  const other = evaluate(env, s.relation.other!, {});
+  const otherText = source.slice(s.relation.other!.span.start, s.relation.other!.span.end).replace(/\s+/g, ' ');
+  if (op === 'in' || op === 'not in') return membershipClaim(env, subject, other, subjectText, otherText, claimed, op === 'in', s);
+  return equalityClaim(env, subject, other, subjectText, otherText, claimed, op === '=', s);
+}
+
+function asMultivectorValue(env: Environment, v: Value): MultivectorValue | undefined {
+  if (v.t === 'multivector') return v;
+  if (v.t === 'vector') return { t: 'multivector', space: v.space, mv: fromVector(env.F, v.coords) };
+  return undefined;
+}
+
+function decomposableClaim(
+  env: Environment,
+  subject: Value,
+  text: string,
+  claimed: string,
+  wanted: boolean,
+  s: ClaimStmt,
+): ClaimOutcome {
+  const mv = asMultivectorValue(env, subject);
+  if (!mv) fail('type/operand', s.subject.span, `only a multivector can be decomposable; ${text} is ${describeValue(subject)}`);
+  const n = mv.space.dim;
+  const code = wanted ? 'claim/decomposable' : 'claim/not-decomposable';
+  if (isZeroMV(mv.mv)) {
+    return { holds: !wanted, code, claimed, found: `${text} is zero, which comes from no subspace`, latex: '0' };
+  }
+  const d = decompositionOf(env, mv);
+  if (d.kind === 'decomposable') {
+    const basis = formatMatrixInline(env.F, d.basis);
+    return {
+      holds: wanted,
+      code,
+      claimed,
+      found: `${text} is decomposable: it is ${env.F.format(d.scalar)} times the wedge of the rows of ${basis}`,
+      latex: matrixLatex(env.F, d.basis),
+    };
+  }
+  if (d.kind === 'not-decomposable') {
+    return {
+      holds: !wanted,
+      code,
+      claimed,
+      found:
+        `${text} is not decomposable: ${describeRelation(env, d.relation, n)}; ` +
+        `the vectors v with v ∧ ${text} = 0 span a space of dimension ${d.divisorDimension}, not ${mv.mv.k}`,
+      latex: relationLatex(env, d.relation, n),
+    };
+  }
+  return { holds: !wanted, code, claimed, found: `${text} is zero`, latex: '0' };
+}
+
+function membershipClaim(
+  env: Environment,
+  subject: Value,
+  other: Value,
+  subjectText: string,
+  otherText: string,
+  claimed: string,
+  wanted: boolean,
+  s: ClaimStmt,
+): ClaimOutcome {
+  if (subject.t !== 'vector') fail('type/operand', s.subject.span, `membership is claimed of a vector; ${subjectText} is ${describeValue(subject)}`);
+  if (other.t !== 'subspace') fail('type/operand', s.relation.other!.span, `a vector lies in a subspace; ${otherText} is ${describeValue(other)}`);
+  if (subject.space.name !== other.space.name) {
+    fail('type/space-mismatch', s.relation.span, `${subjectText} is a vector of ${subject.space.name} but ${otherText} is a subspace of ${other.space.name}`);
+  }
+  const code = wanted ? 'claim/membership' : 'claim/non-membership';
+  const coefficients = coordinatesIn(env.F, other.basis, subject.coords);
+  if (coefficients) {
+    const names = other.basis.map((_, i) => `b${i + 1}`);
+    return {
+      holds: wanted,
+      code,
+      claimed,
+      found: `${subjectText} lies in ${otherText}: ${subjectText} = ${formatCombination(env.F, coefficients, names)} in the reduced basis b1 … b${other.basis.length} = ${formatMatrixInline(env.F, other.basis)}`,
+      latex: '',
+    };
+  }
+  const rank = rref(env.F, [...other.basis, subject.coords], other.space.dim).rank;
+  return {
+    holds: !wanted,
+    code,
+    claimed,
+    found: `${subjectText} = ${formatTuple(env.F, subject.coords)} is not in ${otherText}: adding it to a basis of ${otherText} raises the rank from ${other.basis.length} to ${rank}`,
+    latex: '',
+  };
+}
+
+function pluckerDense(env: Environment, v: Value, span: ClaimStmt['span']): { dense: Scalar[]; n: number; k: number } | undefined {
+  if (v.t === 'subspace') {
+    checkCoordinateLimit(env, v.space.dim, v.basis.length, span);
+    return { dense: toDense(env.F, subspacePlucker(env, v)), n: v.space.dim, k: v.basis.length };
+  }
+  if (v.t === 'multivector') return { dense: toDense(env.F, v.mv), n: v.space.dim, k: v.mv.k };
+  return undefined;
+}
+
+function equalityClaim(
+  env: Environment,
+  subject: Value,
+  other: Value,
+  subjectText: string,
+  otherText: string,
+  claimed: string,
+  wanted: boolean,
+  s: ClaimStmt,
+): ClaimOutcome {
+  const F = env.F;
+  const code = wanted ? 'claim/equality' : 'claim/inequality';
+  const verdict = (equal: boolean, found: string, latex = ''): ClaimOutcome => ({
+    holds: equal === wanted,
+    code,
+    claimed,
+    found,
+    latex,
+  });
+
+  // A count against a number: dim L = 2.
+  if (subject.t === 'integer' || other.t === 'integer') {
+    const a = integerOf(env, subject);
+    const b = integerOf(env, other);
+    if (a === undefined || b === undefined) {
+      fail('type/operand', s.relation.span, `cannot compare ${describeValue(subject)} with ${describeValue(other)}`);
+    }
+    const counted = subject.t === 'integer' ? subjectText : otherText;
+    return verdict(a === b, a === b ? `${counted} = ${subject.t === 'integer' ? a : b}` : `${counted} is ${subject.t === 'integer' ? a : b}, not ${subject.t === 'integer' ? b : a}`);
+  }
+
+  // A projective point against a subspace or multivector: plucker(L) = [1 : 3 : …].
+  if (other.t === 'point' || subject.t === 'point') {
+    const point = other.t === 'point' ? other : (subject as typeof other & { t: 'point' });
+    const thing = other.t === 'point' ? subject : other;
+    const thingText = other.t === 'point' ? subjectText : otherText;
+    const p = pluckerDense(env, thing, s.span);
+    if (!p) fail('type/operand', s.relation.span, `a projective point is compared with a subspace or a multivector, not with ${describeValue(thing)}`);
+    if (point.values.length !== p.dense.length) {
+      fail(
+        'type/wrong-length',
+        (other.t === 'point' ? s.relation.other! : s.subject).span,
+        `this point has ${point.values.length} coordinates, but G(${p.k},${p.n}) has C(${p.n},${p.k}) = ${binomial(p.n, p.k)}`,
+      );
+    }
+    if (point.values.every((x) => F.isZero(x))) {
+      fail('math/zero-point', (other.t === 'point' ? s.relation.other! : s.subject).span, 'all coordinates are zero: that is no projective point');
+    }
+    const shown = normalizePoint(F, p.dense, env.convention.normalization);
+    const equal = projectivelyEqual(F, p.dense, point.values);
+    if (equal) return verdict(true, `${thingText} is the projective point ${formatPoint(F, shown.values)} (${shown.mode})`);
+    const mismatch = firstMismatch(env, p.dense, point.values);
+    return verdict(
+      false,
+      `${thingText} is ${formatPoint(F, shown.values)} (${shown.mode}), which is not a multiple of ${formatPoint(F, point.values)}${mismatch}`,
+    );
+  }
+
+  if (subject.t === 'subspace' && other.t === 'subspace') {
+    if (subject.space.name !== other.space.name) {
+      return verdict(false, `${subjectText} is a subspace of ${subject.space.name} and ${otherText} of ${other.space.name}`);
+    }
+    const equal = subject.basis.length === other.basis.length && subject.basis.every((r, i) => r.every((x, j) => F.eq(x, other.basis[i]![j])));
+    if (equal) return verdict(true, `${subjectText} and ${otherText} have the same reduced basis ${formatMatrixInline(F, subject.basis)}`);
+    return verdict(false, subspaceDifference(env, subject, other, subjectText, otherText));
+  }
+
+  if (subject.t === 'vector' && other.t === 'vector') {
+    const equal = subject.space.name === other.space.name && subject.coords.every((x, i) => F.eq(x, other.coords[i]));
+    return verdict(equal, `${subjectText} = ${formatTuple(F, subject.coords)} and ${otherText} = ${formatTuple(F, other.coords)}`);
+  }
+
+  if (subject.t === 'scalar' && other.t === 'scalar') {
+    return verdict(F.eq(subject.value, other.value), `${subjectText} = ${F.format(subject.value)} and ${otherText} = ${F.format(other.value)}`);
+  }
+
+  const a = asMultivectorValue(env, subject);
+  const b = asMultivectorValue(env, other);
+  if (a && b && a.space.name === b.space.name && a.mv.k === b.mv.k) {
+    const equal = equalsMV(F, a.mv, b.mv);
+    return verdict(equal, equal ? `${subjectText} and ${otherText} have the same coordinates` : `${subjectText} and ${otherText} differ${firstMismatch(env, toDense(F, a.mv), toDense(F, b.mv), true)}`);
+  }
+  fail('type/operand', s.relation.span, `cannot compare ${describeValue(subject)} with ${describeValue(other)}`);
+}
+
+function integerOf(env: Environment, v: Value): number | undefined {
+  if (v.t === 'integer') return v.value;
+  if (v.t === 'scalar' && env.F.characteristic === 0n) {
+    const text = env.F.format(v.value);
+    return /^-?\d+$/.test(text) ? Number(text) : undefined;
+  }
+  if (v.t === 'scalar') return Number(env.F.format(v.value));
+  return undefined;
+}
+
+/** The first coordinate where two vectors fail to be proportional (or, exactly, to agree). */
+function firstMismatch(env: Environment, a: Scalar[], b: Scalar[], exact = false): string {
+  const F = env.F;
+  const i = a.findIndex((x) => !F.isZero(x));
+  const j = b.findIndex((x) => !F.isZero(x));
+  if (i !== j && !exact) return `: the first nonzero coordinate is number ${i + 1} on one side and ${j + 1} on the other`;
+  for (let t = 0; t < a.length; t++) {
+    const differs = exact ? !F.eq(a[t], b[t]) : !F.eq(F.mul(a[t], b[i]), F.mul(b[t], a[i]));
+    if (differs) return `: coordinate number ${t + 1} breaks the proportion (${F.format(a[t])} against ${F.format(b[t])})`;
+  }
+  return '';
+}
+
+function subspaceDifference(env: Environment, a: SubspaceValue, b: SubspaceValue, aText: string, bText: string): string {
+  const F = env.F;
+  if (a.basis.length !== b.basis.length) {
+    return `dim ${aText} = ${a.basis.length} but dim ${bText} = ${b.basis.length}`;
+  }
+  const outside = a.basis.find((r) => !coordinatesIn(F, b.basis, r));
+  const where = outside ? `; the vector ${formatTuple(F, outside)} of ${aText} is not in ${bText}` : '';
+  return `${aText} and ${bText} are different ${a.basis.length}-dimensional subspaces (reduced bases ${formatMatrixInline(F, a.basis)} and ${formatMatrixInline(F, b.basis)})${where}`;
+}

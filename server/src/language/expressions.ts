@@ -1,0 +1,538 @@
+/**
+ * Evaluation of expressions into values, with type checking on the way. Every
+ * failure is a `Failure` carrying a problem with the span of the offending
+ * sub-expression, or `Poisoned` when an earlier failure already explains it.
+ */
+import { DivisionByZeroError } from '../engine/field.js';
+import { findDependency, intersectRowSpaces, kernel, rref, sumRowSpaces } from '../engine/matrix.js';
+import {
+  add as addMV,
+  fromTerms,
+  fromVector,
+  isZeroMV,
+  neg as negMV,
+  scale as scaleMV,
+  sub as subMV,
+  wedge as wedgeMV,
+  type Multivector,
+} from '../engine/multivector.js';
+import { binomial } from '../engine/subsets.js';
+import { parseRational } from '../engine/rational.js';
+import { chartCoordinates } from '../engine/chart.js';
+import type {
+  Binary,
+  Call,
+  DimExpr,
+  Entry,
+  Expr,
+  IndexMapLit,
+  MatrixLit,
+  NameRef,
+  SolutionsExpr,
+  RowsExpr,
+  Tuple,
+} from './ast.js';
+import { basisCandidates, subspacePlucker, type Environment } from './environment.js';
+import { fail, Poisoned } from './failure.js';
+import { decompositionOf, describeRelation } from './decomposition.js';
+import { formatCombination, formatScalar } from './text.js';
+import { coordinateName } from './conventions.js';
+import type { Span } from './types.js';
+import {
+  describeValue,
+  type MatrixValue,
+  type MultivectorValue,
+  type Scalar,
+  type SpaceInfo,
+  type SubspaceValue,
+  type Value,
+  type VectorValue,
+} from './values.js';
+
+/** What the surrounding statement tells an expression: the space named by `in V`, if any. */
+export interface ExprContext {
+  space?: SpaceInfo;
+}
+
+export function evaluate(env: Environment, e: Expr, ctx: ExprContext): Value {
+  switch (e.type) {
+    case 'number':
+      return { t: 'scalar', value: literal(env, e.text, e.span) };
+    case 'name':
+      return lookup(env, e);
+    case 'unary': {
+      const v = evaluate(env, e.operand, ctx);
+      return e.op === '+' ? v : negate(env, v, e.span);
+    }
+    case 'binary':
+      return binary(env, e, ctx);
+    case 'call':
+      return call(env, e, ctx);
+    case 'tuple':
+      return tuple(env, e, ctx);
+    case 'dim':
+      return dimension(env, e, ctx);
+    case 'matrix':
+      return matrix(env, e);
+    case 'point':
+      return { t: 'point', values: e.entries.map((x) => entry(env, x)) };
+    case 'indexmap':
+      return indexMap(env, e, ctx);
+    case 'rows':
+      return rowsSubspace(env, e, ctx);
+    case 'solutions':
+      return solutionsSubspace(env, e, ctx);
+  }
+}
+
+/** An exact literal ('3', '0.125', '-1/2') as an element of the file's field. */
+function literal(env: Environment, text: string, span: Span): Scalar {
+  let r;
+  try {
+    r = parseRational(text);
+  } catch (err) {
+    if (err instanceof DivisionByZeroError) fail('math/division-by-zero', span, `${text} divides by zero`);
+    fail('syntax/bad-number', span, `'${text}' is not a number`);
+  }
+  try {
+    return env.F.fromRational(r.num, r.den);
+  } catch (err) {
+    if (err instanceof DivisionByZeroError) {
+      fail('math/division-by-zero', span, `${text} has a denominator that is zero in ${env.F.name}`);
+    }
+    throw err;
+  }
+}
+
+function entry(env: Environment, x: Entry): Scalar {
+  return literal(env, x.text, x.span);
+}
+
+function lookup(env: Environment, e: NameRef): Value {
+  const name = e.name.name;
+  if (e.qualifier) {
+    const space = env.spaces.get(e.qualifier.name);
+    if (!space) throw new Poisoned();
+    const index = space.basisNames.indexOf(name);
+    if (index < 0) throw new Poisoned();
+    return basisVector(env, space, index);
+  }
+  const bound = env.bindings.get(name);
+  if (bound) {
+    if (!bound.value) throw new Poisoned();
+    return bound.value;
+  }
+  const space = env.spaces.get(name);
+  if (space) return { t: 'space', space };
+  const candidates = basisCandidates(env, name);
+  if (candidates.length === 1) return basisVector(env, candidates[0]!.space, candidates[0]!.index);
+  // Unknown and ambiguous names were reported by name resolution.
+  throw new Poisoned();
+}
+
+function basisVector(env: Environment, space: SpaceInfo, index: number): VectorValue {
+  const coords = Array.from({ length: space.dim }, (_, i) => (i === index ? env.F.one : env.F.zero));
+  return { t: 'vector', space, coords };
+}
+
+/** A vector as a degree-1 multivector, so that sums and wedges mix the two freely. */
+function asMultivector(env: Environment, v: Value): MultivectorValue | undefined {
+  if (v.t === 'multivector') return v;
+  if (v.t === 'vector') return { t: 'multivector', space: v.space, mv: fromVector(env.F, v.coords) };
+  return undefined;
+}
+
+function sameSpace(a: SpaceInfo, b: SpaceInfo, span: Span, what: string): void {
+  if (a.name !== b.name) {
+    fail('type/space-mismatch', span, `${what}: the left side lives in ${a.name} and the right side in ${b.name}`);
+  }
+}
+
+function negate(env: Environment, v: Value, span: Span): Value {
+  const F = env.F;
+  switch (v.t) {
+    case 'scalar':
+      return { t: 'scalar', value: F.neg(v.value) };
+    case 'vector':
+      return { ...v, coords: v.coords.map((x) => F.neg(x)) };
+    case 'multivector':
+      return { t: 'multivector', space: v.space, mv: negMV(F, v.mv) };
+    case 'point':
+      return { t: 'point', values: v.values.map((x) => F.neg(x)) };
+    default:
+      fail('type/operand', span, `cannot negate ${describeValue(v)}`);
+  }
+}
+
+function binary(env: Environment, e: Binary, ctx: ExprContext): Value {
+  const left = evaluate(env, e.left, ctx);
+  const right = evaluate(env, e.right, ctx);
+  switch (e.op) {
+    case '+':
+    case '-':
+      return addOrSubtract(env, e, left, right);
+    case '*':
+      return multiply(env, e, left, right);
+    case '/':
+      return divide(env, e, left, right);
+    case '^':
+      return wedge(env, e, left, right);
+    case '&':
+      return intersect(env, e, left, right);
+  }
+}
+
+function addOrSubtract(env: Environment, e: Binary, left: Value, right: Value): Value {
+  const F = env.F;
+  const minus = e.op === '-';
+  const verb = minus ? 'subtract' : 'add';
+  if (left.t === 'scalar' && right.t === 'scalar') {
+    return { t: 'scalar', value: minus ? F.sub(left.value, right.value) : F.add(left.value, right.value) };
+  }
+  if (left.t === 'vector' && right.t === 'vector') {
+    sameSpace(left.space, right.space, e.opSpan, `cannot ${verb} vectors of different spaces`);
+    const coords = left.coords.map((x, i) => (minus ? F.sub(x, right.coords[i]) : F.add(x, right.coords[i])));
+    return { t: 'vector', space: left.space, coords };
+  }
+  if (left.t === 'subspace' && right.t === 'subspace' && !minus) {
+    sameSpace(left.space, right.space, e.opSpan, 'cannot add subspaces of different spaces');
+    return subspaceOf(env, left.space, sumRowSpaces(env.F, left.basis, right.basis, left.space.dim));
+  }
+  const a = asMultivector(env, left);
+  const b = asMultivector(env, right);
+  if (a && b) {
+    sameSpace(a.space, b.space, e.opSpan, `cannot ${verb} multivectors of different spaces`);
+    if (a.mv.k !== b.mv.k) {
+      fail(
+        'type/mixed-degree',
+        e.opSpan,
+        `cannot ${verb} a multivector of degree ${a.mv.k} and one of degree ${b.mv.k}: only elements of one exterior power add`,
+      );
+    }
+    return { t: 'multivector', space: a.space, mv: minus ? subMV(F, a.mv, b.mv) : addMV(F, a.mv, b.mv) };
+  }
+  const hint = left.t === 'subspace' && right.t === 'subspace' ? ' (subspaces have a sum `+` and an intersection `&`, no difference)' : '';
+  fail('type/operand', e.opSpan, `cannot ${verb} ${describeValue(left)} and ${describeValue(right)}${hint}`);
+}
+
+function scaleValue(env: Environment, c: Scalar, v: Value, span: Span): Value {
+  const F = env.F;
+  switch (v.t) {
+    case 'scalar':
+      return { t: 'scalar', value: F.mul(c, v.value) };
+    case 'vector':
+      return { ...v, coords: v.coords.map((x) => F.mul(c, x)) };
+    case 'multivector':
+      return { t: 'multivector', space: v.space, mv: scaleMV(F, c, v.mv) };
+    default:
+      fail('type/operand', span, `cannot multiply ${describeValue(v)} by a scalar`);
+  }
+}
+
+function multiply(env: Environment, e: Binary, left: Value, right: Value): Value {
+  if (left.t === 'scalar') return scaleValue(env, left.value, right, e.span);
+  if (right.t === 'scalar') return scaleValue(env, right.value, left, e.span);
+  const both = (left.t === 'vector' || left.t === 'multivector') && (right.t === 'vector' || right.t === 'multivector');
+  const hint = both ? '; for the wedge product write ^ or ∧' : '';
+  fail('type/operand', e.implicit ? e.span : e.opSpan, `cannot multiply ${describeValue(left)} by ${describeValue(right)}${hint}`);
+}
+
+function divide(env: Environment, e: Binary, left: Value, right: Value): Value {
+  if (right.t !== 'scalar') fail('type/operand', e.opSpan, `can only divide by a scalar, not by ${describeValue(right)}`);
+  if (env.F.isZero(right.value)) fail('math/division-by-zero', e.right.span, `division by zero (the divisor is 0 in ${env.F.name})`);
+  return scaleValue(env, env.F.inv(right.value), left, e.span);
+}
+
+function wedge(env: Environment, e: Binary, left: Value, right: Value): Value {
+  const a = asMultivector(env, left);
+  const b = asMultivector(env, right);
+  if (!a || !b) {
+    const scalarHint = left.t === 'scalar' || right.t === 'scalar' ? ' (scalars multiply with * or by juxtaposition, e.g. 3 e1)' : '';
+    fail('type/operand', e.opSpan, `cannot wedge ${describeValue(left)} with ${describeValue(right)}${scalarHint}`);
+  }
+  sameSpace(a.space, b.space, e.opSpan, 'cannot wedge elements of different spaces');
+  return { t: 'multivector', space: a.space, mv: wedgeMV(env.F, a.mv, b.mv) };
+}
+
+function intersect(env: Environment, e: Binary, left: Value, right: Value): Value {
+  if (left.t !== 'subspace' || right.t !== 'subspace') {
+    fail('type/operand', e.opSpan, `& intersects subspaces; found ${describeValue(left)} and ${describeValue(right)}`);
+  }
+  sameSpace(left.space, right.space, e.opSpan, 'cannot intersect subspaces of different spaces');
+  return subspaceOf(env, left.space, intersectRowSpaces(env.F, left.basis, right.basis, left.space.dim));
+}
+
+/** The subspace spanned by `rows`, reduced; `given` keeps the user's rows when they are independent. */
+export function subspaceOf(env: Environment, space: SpaceInfo, rows: Scalar[][], given?: Scalar[][]): SubspaceValue {
+  const ech = rref(env.F, rows, space.dim);
+  const value: SubspaceValue = { t: 'subspace', space, basis: ech.rows, pivots: ech.pivots };
+  if (given && given.length === ech.rank) value.given = given;
+  return value;
+}
+
+/** The space a literal lives in: `in V`, else the only declared space (of the right dimension, if known). */
+function contextSpace(env: Environment, ctx: ExprContext, span: Span, width: number | undefined, what: string): SpaceInfo {
+  if (ctx.space) {
+    if (width !== undefined && width !== ctx.space.dim) {
+      fail(
+        'type/wrong-length',
+        span,
+        `${what} has ${width} ${width === 1 ? 'entry' : 'entries'} per vector, but ${ctx.space.name} has dimension ${ctx.space.dim}`,
+      );
+    }
+    return ctx.space;
+  }
+  const all = [...env.spaces.values()];
+  if (all.length === 0) fail('type/no-space', span, `${what} needs a space: declare one first, e.g. \`space V dim ${width ?? 4}\``);
+  const fitting = width === undefined ? all : all.filter((s) => s.dim === width);
+  if (all.length === 1) {
+    const only = all[0]!;
+    if (width !== undefined && width !== only.dim) {
+      fail('type/wrong-length', span, `${what} has ${width} entries per vector, but ${only.name} has dimension ${only.dim}`);
+    }
+    return only;
+  }
+  if (fitting.length === 1) return fitting[0]!;
+  const names = (fitting.length ? fitting : all).map((s) => s.name).join(', ');
+  fail('type/which-space', span, `${what} could live in ${names}: add \`in <space>\` at the end of the statement`);
+}
+
+function tuple(env: Environment, e: Tuple, ctx: ExprContext): VectorValue {
+  const coords = e.items.map((item) => {
+    const v = evaluate(env, item, ctx);
+    if (v.t !== 'scalar') fail('type/operand', item.span, `a coordinate must be a scalar, found ${describeValue(v)}`);
+    return v.value;
+  });
+  const space = contextSpace(env, ctx, e.span, coords.length, 'this coordinate tuple');
+  return { t: 'vector', space, coords };
+}
+
+function matrix(env: Environment, e: MatrixLit): MatrixValue {
+  const rows = e.rows.map((r) => r.map((x) => entry(env, x)));
+  const ncols = rows[0]?.length ?? 0;
+  e.rows.forEach((r, i) => {
+    if (r.length !== ncols) {
+      const first = r[0]?.span ?? e.span;
+      const last = r[r.length - 1]?.span ?? e.span;
+      fail(
+        'type/ragged-matrix',
+        { start: first.start, end: last.end },
+        `row ${i + 1} of this matrix has ${r.length} entries, but row 1 has ${ncols}`,
+      );
+    }
+  });
+  return { t: 'matrix', rows, ncols };
+}
+
+function describeDependency(env: Environment, names: string[], index: number, coefficients: Scalar[]): string {
+  const target = names[index]!;
+  if (index === 0 || coefficients.every((c) => env.F.isZero(c))) return `${target} is the zero vector`;
+  return `${target} = ${formatCombination(env.F, coefficients, names.slice(0, index))}`;
+}
+
+/** Reports a dependent list of rows as an error that keeps the statement's value. */
+function reportDependency(
+  env: Environment,
+  code: string,
+  rows: Scalar[][],
+  names: string[],
+  spans: Span[],
+  related: { span: Span; message: string }[],
+  whole: Span,
+  what: string,
+): void {
+  const dep = findDependency(env.F, rows);
+  if (!dep) return;
+  const message =
+    `${what} is degenerate: ${describeDependency(env, names, dep.index, dep.coefficients)}` +
+    (dep.index > 0 ? ` (${names[dep.index]} depends on the vectors before it)` : '') +
+    `; the span has dimension ${rref(env.F, rows, rows[0]?.length ?? 0).rank}, not ${rows.length}`;
+  env.problems.push({
+    code,
+    severity: 'error',
+    message,
+    span: spans[dep.index] ?? whole,
+    ...(related.length ? { related } : {}),
+  });
+}
+
+function spanCall(env: Environment, e: Call, ctx: ExprContext): SubspaceValue {
+  if (e.args.length === 0) fail('type/arguments', e.span, 'span needs at least one vector: span(v1, v2, …)');
+  const vectors = e.args.map((arg) => {
+    const v = evaluate(env, arg, ctx);
+    if (v.t === 'vector') return v;
+    if (v.t === 'multivector' && v.mv.k === 1) return { t: 'vector' as const, space: v.space, coords: denseVector(env, v.mv, v.space) };
+    fail('type/operand', arg.span, `span takes vectors, found ${describeValue(v)}`);
+  });
+  const space = vectors[0]!.space;
+  vectors.forEach((v, i) => sameSpace(space, v.space, e.args[i]!.span, 'span of vectors from different spaces'));
+  const rows = vectors.map((v) => v.coords);
+  const names = e.args.map((arg) => (arg.type === 'name' ? arg.name.name : `(${env.source.slice(arg.span.start, arg.span.end).replace(/\s+/g, ' ')})`));
+  const related = e.args.flatMap((arg) => {
+    if (arg.type !== 'name') return [];
+    const bound = env.bindings.get(arg.name.name);
+    return bound ? [{ span: bound.declSpan, message: `${arg.name.name} is declared here` }] : [];
+  });
+  reportDependency(env, 'math/degenerate-span', rows, names, e.args.map((a) => a.span), related, e.span, 'this list of vectors');
+  return subspaceOf(env, space, rows, rows);
+}
+
+function denseVector(env: Environment, mv: Multivector<Scalar>, space: SpaceInfo): Scalar[] {
+  const coords = new Array(space.dim).fill(env.F.zero);
+  for (const t of mv.terms.values()) coords[t.subset[0]!] = t.coeff;
+  return coords;
+}
+
+function rowsSubspace(env: Environment, e: RowsExpr, ctx: ExprContext): SubspaceValue {
+  const m = matrix(env, e.matrix);
+  const space = contextSpace(env, ctx, e.matrix.span, m.ncols, 'this matrix');
+  const rowSpans = e.matrix.rows.map((r) => ({ start: r[0]!.span.start, end: r[r.length - 1]!.span.end }));
+  const names = m.rows.map((_, i) => `row ${i + 1}`);
+  reportDependency(env, 'math/degenerate-rows', m.rows, names, rowSpans, [], e.span, 'this basis matrix');
+  return subspaceOf(env, space, m.rows, m.rows);
+}
+
+function solutionsSubspace(env: Environment, e: SolutionsExpr, ctx: ExprContext): SubspaceValue {
+  const m = matrix(env, e.matrix);
+  const space = contextSpace(env, ctx, e.matrix.span, m.ncols, 'this system of equations');
+  return subspaceOf(env, space, kernel(env.F, m.rows, space.dim));
+}
+
+function indexMap(env: Environment, e: IndexMapLit, ctx: ExprContext): MultivectorValue {
+  const first = e.entries[0];
+  if (!first) fail('syntax/empty-index-map', e.span, 'an index-set multivector needs at least one entry, e.g. {12: 1}');
+  const k = first.key.labels.length;
+  const maxLabel = Math.max(...e.entries.flatMap((x) => x.key.labels));
+  const space = contextSpace(env, ctx, e.span, undefined, 'this multivector');
+  const n = space.dim;
+  const terms: [number[], Scalar][] = [];
+  for (const x of e.entries) {
+    const labels = x.key.labels;
+    if (labels.length !== k) {
+      fail('type/mixed-degree', x.key.span, `index set ${labels.join('')} has ${labels.length} labels, but the first has ${k}: all terms must have one degree`);
+    }
+    const positions = labels.map((l) => l - env.convention.firstLabel);
+    const bad = positions.findIndex((p) => p < 0 || p >= n);
+    if (bad >= 0) {
+      fail('type/bad-label', x.key.span, `label ${labels[bad]} is outside 1…${n} (the labels of ${space.name}, dimension ${n})`);
+    }
+    if (new Set(positions).size !== positions.length) {
+      fail('type/repeated-label', x.key.span, `index set ${labels.join('')} repeats a label; a wedge with a repeated vector is zero, so leave it out`);
+    }
+    terms.push([positions, entry(env, x.value)]);
+  }
+  void maxLabel;
+  return { t: 'multivector', space, mv: fromTerms(env.F, n, k, terms) };
+}
+
+function dimension(env: Environment, e: DimExpr, ctx: ExprContext): Value {
+  const v = evaluate(env, e.operand, ctx);
+  if (v.t === 'subspace') return { t: 'integer', value: v.basis.length };
+  if (v.t === 'space') return { t: 'integer', value: v.space.dim };
+  fail('type/operand', e.operand.span, `dim applies to a subspace or a space, found ${describeValue(v)}`);
+}
+
+/** Reads an index set argument: `13` (one digit a label) or `(1, 3)`. */
+function indexSetArgument(env: Environment, arg: Expr, space: SpaceInfo, k: number): number[] {
+  let labels: number[];
+  if (arg.type === 'number' && /^\d+$/.test(arg.text)) {
+    labels = space.dim <= 9 ? [...arg.text].map(Number) : [Number(arg.text)];
+    if (space.dim > 9 && k > 1) {
+      fail('type/index-set', arg.span, `with labels above 9 write the index set as a list, e.g. (1, 10)`);
+    }
+  } else if (arg.type === 'tuple' && arg.items.every((x) => x.type === 'number' && /^\d+$/.test(x.text))) {
+    labels = arg.items.map((x) => Number((x as { text: string }).text));
+  } else {
+    fail('type/index-set', arg.span, 'expected an index set such as 13 or (1, 3)');
+  }
+  if (labels.length !== k) {
+    fail('type/index-set', arg.span, `the index set has ${labels.length} labels, but the subspace has dimension ${k}`);
+  }
+  const positions = labels.map((l) => l - env.convention.firstLabel);
+  const bad = positions.findIndex((p) => p < 0 || p >= space.dim);
+  if (bad >= 0) fail('type/bad-label', arg.span, `label ${labels[bad]} is outside 1…${space.dim}`);
+  if (new Set(positions).size !== positions.length) fail('type/repeated-label', arg.span, 'the index set repeats a label');
+  return positions;
+}
+
+function expectSubspace(env: Environment, arg: Expr, ctx: ExprContext, what: string): SubspaceValue {
+  const v = evaluate(env, arg, ctx);
+  if (v.t !== 'subspace') fail('type/operand', arg.span, `${what} takes a subspace, found ${describeValue(v)}`);
+  return v;
+}
+
+function arity(e: Call, n: number, signature: string): void {
+  if (e.args.length !== n) {
+    fail('type/arguments', e.span, `${signature} takes ${n} argument${n === 1 ? '' : 's'}, found ${e.args.length}`);
+  }
+}
+
+/** Guards against computing more Plücker coordinates than the limit allows. */
+export function checkCoordinateLimit(env: Environment, n: number, k: number, span: Span): void {
+  const count = binomial(n, k);
+  if (count > env.limits.maxCoordinates) {
+    fail(
+      'limit/too-many-coordinates',
+      span,
+      `G(${k},${n}) has C(${n},${k}) = ${count} Plücker coordinates, more than the limit of ${env.limits.maxCoordinates}`,
+    );
+  }
+}
+
+function call(env: Environment, e: Call, ctx: ExprContext): Value {
+  switch (e.callee.name) {
+    case 'span':
+      return spanCall(env, e, ctx);
+    case 'plucker': {
+      arity(e, 1, 'plucker(W)');
+      const v = evaluate(env, e.args[0]!, ctx);
+      if (v.t === 'subspace') {
+        checkCoordinateLimit(env, v.space.dim, v.basis.length, e.span);
+        return { t: 'multivector', space: v.space, mv: subspacePlucker(env, v), pluckerOf: v };
+      }
+      const mv = asMultivector(env, v);
+      if (mv) return mv;
+      fail('type/operand', e.args[0]!.span, `plucker takes a subspace, found ${describeValue(v)}`);
+    }
+    case 'recover': {
+      arity(e, 1, 'recover(ω)');
+      const v = evaluate(env, e.args[0]!, ctx);
+      const mv = asMultivector(env, v);
+      if (!mv) fail('type/operand', e.args[0]!.span, `recover takes a multivector, found ${describeValue(v)}`);
+      if (isZeroMV(mv.mv)) fail('math/zero-multivector', e.args[0]!.span, 'the zero multivector comes from no subspace');
+      const d = decompositionOf(env, mv);
+      if (d.kind === 'not-decomposable') {
+        fail(
+          'math/not-decomposable',
+          e.args[0]!.span,
+          `cannot recover a subspace: this multivector is not decomposable — ${describeRelation(env, d.relation, mv.space.dim)}`,
+        );
+      }
+      if (d.kind === 'zero') fail('math/zero-multivector', e.args[0]!.span, 'the zero multivector comes from no subspace');
+      return subspaceOf(env, mv.space, d.basis);
+    }
+    case 'chart': {
+      arity(e, 2, 'chart(W, I)');
+      const w = expectSubspace(env, e.args[0]!, ctx, 'chart');
+      const columns = indexSetArgument(env, e.args[1]!, w.space, w.basis.length);
+      const c = chartCoordinates(env.F, w.basis, w.space.dim, columns);
+      if (!c.ok) {
+        const sorted = columns.slice().sort((a, b) => a - b);
+        fail(
+          'math/chart-zero-minor',
+          e.args[1]!.span,
+          `${coordinateName(sorted, w.space.dim)} = 0: this subspace is not in the chart where ${coordinateName(sorted, w.space.dim)} ≠ 0; choose columns whose Plücker coordinate is nonzero`,
+        );
+      }
+      return { t: 'chart', subspace: w, columns, otherColumns: c.otherColumns, block: c.block, full: c.full };
+    }
+    default:
+      // Unknown operations were reported by name resolution.
+      throw new Poisoned();
+  }
+}
+
+/** For messages: the scalar as text in the file's field. */
+export function scalarText(env: Environment, s: Scalar): string {
+  return formatScalar(env.F, s);
+}

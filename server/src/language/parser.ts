@@ -1,0 +1,373 @@
+/**
+ * The grammar of one `.wedge` statement, as a Chevrotain CST parser.
+ *
+ * The parser recognises exactly one statement at a time: `parse.ts` cuts the
+ * token stream at statement keywords (which occur nowhere else in the
+ * language) and feeds the pieces here one by one. That cut is the
+ * statement-level resynchronisation: an error can only ever spoil its own
+ * statement. Inside a statement Chevrotain's own recovery is switched off, so
+ * one broken statement gives exactly one error and never a half-recovered tree
+ * (see `parse.ts`).
+ *
+ * The tree is turned into the AST of `./ast.ts` by `./build-ast.ts`; the
+ * labels used here (`LABEL`) are the names that builder reads.
+ */
+import { CstParser, type CstNode, type IToken } from 'chevrotain';
+import {
+  ALL_TOKENS, Basis, Claim, Colon, Comma, Decomposable, Dim, Dot, ElementOf, Equals, Field, Identifier,
+  In, Intersect, LBrace, LBracket, LParen, Minus, Multivector, Normalize, Not, NotElementOf, NotEquals,
+  NumberLiteral, Plus, RBrace, RBracket, RParen, Rows, Semicolon, Show, Slash, Solutions, Space, Star,
+  Subspace, Vector, WedgeOp,
+} from './tokens.js';
+import { createErrorMessageProvider, type MessageContext } from './syntax-messages.js';
+
+export class StatementParser extends CstParser {
+  /** What the error messages need to know about the piece being parsed; set by `parseStatement`. */
+  readonly context: MessageContext;
+
+  constructor(context: MessageContext) {
+    super(ALL_TOKENS, {
+      recoveryEnabled: false,
+      errorMessageProvider: createErrorMessageProvider(context),
+      maxLookahead: 2,
+    });
+    this.context = context;
+    this.performSelfAnalysis();
+  }
+
+  statement = this.RULE('statement', () => {
+    this.OR([
+      { ALT: () => this.SUBRULE(this.fieldStmt) },
+      { ALT: () => this.SUBRULE(this.normalizeStmt) },
+      { ALT: () => this.SUBRULE(this.spaceStmt) },
+      { ALT: () => this.SUBRULE(this.declStmt) },
+      { ALT: () => this.SUBRULE(this.claimStmt) },
+      { ALT: () => this.SUBRULE(this.showStmt) },
+    ]);
+  });
+
+  fieldStmt = this.RULE('fieldStmt', () => {
+    this.CONSUME(Field, { LABEL: 'keyword' });
+    this.CONSUME(Identifier, { LABEL: 'name' });
+    this.OPTION(() => {
+      this.CONSUME(LParen);
+      this.CONSUME(NumberLiteral, { LABEL: 'modulus' });
+      this.CONSUME(RParen);
+    });
+  });
+
+  normalizeStmt = this.RULE('normalizeStmt', () => {
+    this.CONSUME(Normalize, { LABEL: 'keyword' });
+    this.CONSUME(Identifier, { LABEL: 'word' });
+    this.MANY(() => {
+      this.CONSUME(Minus);
+      this.CONSUME2(Identifier, { LABEL: 'word' });
+    });
+  });
+
+  spaceStmt = this.RULE('spaceStmt', () => {
+    this.CONSUME(Space, { LABEL: 'keyword' });
+    this.CONSUME(Identifier, { LABEL: 'name' });
+    this.CONSUME(Dim);
+    this.CONSUME(NumberLiteral, { LABEL: 'dim' });
+    this.OPTION(() => {
+      this.CONSUME(Basis);
+      this.AT_LEAST_ONE(() => this.CONSUME2(Identifier, { LABEL: 'basis' }));
+    });
+  });
+
+  declStmt = this.RULE('declStmt', () => {
+    this.OR([
+      { ALT: () => this.CONSUME(Vector, { LABEL: 'keyword' }) },
+      { ALT: () => this.CONSUME(Subspace, { LABEL: 'keyword' }) },
+      { ALT: () => this.CONSUME(Multivector, { LABEL: 'keyword' }) },
+    ]);
+    this.CONSUME(Identifier, { LABEL: 'name' });
+    this.CONSUME(Equals);
+    this.SUBRULE(this.expression, { LABEL: 'value' });
+    this.OPTION(() => {
+      this.OR2([{ ALT: () => this.CONSUME(In) }, { ALT: () => this.CONSUME(ElementOf) }]);
+      this.CONSUME2(Identifier, { LABEL: 'inSpace' });
+    });
+  });
+
+  claimStmt = this.RULE('claimStmt', () => {
+    this.CONSUME(Claim, { LABEL: 'keyword' });
+    this.SUBRULE(this.expression, { LABEL: 'subject' });
+    this.SUBRULE(this.relation);
+  });
+
+  relation = this.RULE('relation', () => {
+    this.OR([
+      {
+        ALT: () => {
+          this.OR2([
+            { ALT: () => this.CONSUME(Equals, { LABEL: 'equals' }) },
+            { ALT: () => this.CONSUME(NotEquals, { LABEL: 'notEquals' }) },
+          ]);
+          this.SUBRULE(this.expression, { LABEL: 'other' });
+        },
+      },
+      {
+        ALT: () => {
+          this.OR3([
+            { ALT: () => this.CONSUME(In, { LABEL: 'in' }) },
+            { ALT: () => this.CONSUME(ElementOf, { LABEL: 'in' }) },
+          ]);
+          this.SUBRULE2(this.expression, { LABEL: 'other' });
+        },
+      },
+      {
+        ALT: () => {
+          this.CONSUME(NotElementOf, { LABEL: 'notIn' });
+          this.SUBRULE3(this.expression, { LABEL: 'other' });
+        },
+      },
+      {
+        ALT: () => {
+          this.CONSUME(Not, { LABEL: 'not' });
+          this.OR4([
+            {
+              ALT: () => {
+                this.OR5([
+                  { ALT: () => this.CONSUME2(In, { LABEL: 'in' }) },
+                  { ALT: () => this.CONSUME2(ElementOf, { LABEL: 'in' }) },
+                ]);
+                this.SUBRULE4(this.expression, { LABEL: 'other' });
+              },
+            },
+            { ALT: () => this.CONSUME(Decomposable, { LABEL: 'decomposable' }) },
+          ]);
+        },
+      },
+      { ALT: () => this.CONSUME2(Decomposable, { LABEL: 'decomposable' }) },
+    ]);
+  });
+
+  showStmt = this.RULE('showStmt', () => {
+    this.CONSUME(Show, { LABEL: 'keyword' });
+    this.SUBRULE(this.expression, { LABEL: 'value' });
+  });
+
+  /** The loosest level: intersection `&` / `∩`. */
+  expression = this.RULE('expression', () => {
+    this.SUBRULE(this.additive, { LABEL: 'operand' });
+    this.MANY(() => {
+      this.CONSUME(Intersect, { LABEL: 'op' });
+      this.SUBRULE2(this.additive, { LABEL: 'operand' });
+    });
+  });
+
+  additive = this.RULE('additive', () => {
+    this.SUBRULE(this.multiplicative, { LABEL: 'operand' });
+    this.MANY(() => {
+      this.OR([
+        { ALT: () => this.CONSUME(Plus, { LABEL: 'op' }) },
+        { ALT: () => this.CONSUME(Minus, { LABEL: 'op' }) },
+      ]);
+      this.SUBRULE2(this.multiplicative, { LABEL: 'operand' });
+    });
+  });
+
+  /** `*`, `/` and juxtaposition, left to right; each step is one `mulTail` so their order survives in the tree. */
+  multiplicative = this.RULE('multiplicative', () => {
+    this.SUBRULE(this.unary, { LABEL: 'head' });
+    this.MANY(() => this.SUBRULE(this.mulTail, { LABEL: 'tail' }));
+  });
+
+  /** `* x`, `/ x`, or a juxtaposed factor (which cannot begin with a sign, so `a - b` stays a difference). */
+  mulTail = this.RULE('mulTail', () => {
+    this.OR([
+      {
+        ALT: () => {
+          this.OR2([
+            { ALT: () => this.CONSUME(Star, { LABEL: 'op' }) },
+            { ALT: () => this.CONSUME(Slash, { LABEL: 'op' }) },
+          ]);
+          this.SUBRULE(this.unary, { LABEL: 'operand' });
+        },
+      },
+      { ALT: () => this.SUBRULE(this.wedge, { LABEL: 'juxtaposed' }) },
+    ]);
+  });
+
+  unary = this.RULE('unary', () => {
+    this.OR([
+      {
+        ALT: () => {
+          this.OR2([
+            { ALT: () => this.CONSUME(Minus, { LABEL: 'sign' }) },
+            { ALT: () => this.CONSUME(Plus, { LABEL: 'sign' }) },
+          ]);
+          this.SUBRULE(this.unary, { LABEL: 'operand' });
+        },
+      },
+      { ALT: () => this.SUBRULE(this.wedge, { LABEL: 'operand' }) },
+    ]);
+  });
+
+  wedge = this.RULE('wedge', () => {
+    this.SUBRULE(this.primary, { LABEL: 'operand' });
+    this.MANY(() => {
+      this.CONSUME(WedgeOp, { LABEL: 'op' });
+      this.SUBRULE2(this.primary, { LABEL: 'operand' });
+    });
+  });
+
+  primary = this.RULE('primary', () => {
+    this.OR([
+      { ALT: () => this.CONSUME(NumberLiteral, { LABEL: 'number' }) },
+      { ALT: () => this.SUBRULE(this.nameOrCall) },
+      { ALT: () => this.SUBRULE(this.parenthesised) },
+      { ALT: () => this.SUBRULE(this.bracket) },
+      { ALT: () => this.SUBRULE(this.indexMap) },
+      { ALT: () => this.SUBRULE(this.rowsExpr) },
+      { ALT: () => this.SUBRULE(this.solutionsExpr) },
+      { ALT: () => this.SUBRULE(this.dimExpr) },
+    ]);
+  });
+
+  /** `name`, `Space.name`, or a call `name(args)`. */
+  nameOrCall = this.RULE('nameOrCall', () => {
+    this.CONSUME(Identifier, { LABEL: 'name' });
+    this.OPTION(() => {
+      this.OR([
+        {
+          ALT: () => {
+            this.CONSUME(LParen, { LABEL: 'open' });
+            this.OPTION2(() => {
+              this.SUBRULE(this.expression, { LABEL: 'arg' });
+              this.MANY(() => {
+                this.CONSUME(Comma);
+                this.SUBRULE2(this.expression, { LABEL: 'arg' });
+              });
+            });
+            this.CONSUME(RParen, { LABEL: 'close' });
+          },
+        },
+        {
+          ALT: () => {
+            this.CONSUME(Dot, { LABEL: 'dot' });
+            this.CONSUME2(Identifier, { LABEL: 'member' });
+          },
+        },
+      ]);
+    });
+  });
+
+  /** `(x)` or a tuple `(x, y, …)`. */
+  parenthesised = this.RULE('parenthesised', () => {
+    this.CONSUME(LParen, { LABEL: 'open' });
+    this.SUBRULE(this.expression, { LABEL: 'item' });
+    this.MANY(() => {
+      this.CONSUME(Comma);
+      this.SUBRULE2(this.expression, { LABEL: 'item' });
+    });
+    this.CONSUME(RParen, { LABEL: 'close' });
+  });
+
+  /** `[ … ]`: a matrix or, when the entries are separated by `:`, a projective point. */
+  bracket = this.RULE('bracket', () => {
+    this.CONSUME(LBracket, { LABEL: 'open' });
+    this.SUBRULE(this.entry, { LABEL: 'first' });
+    this.MANY(() => this.SUBRULE(this.bracketItem, { LABEL: 'item' }));
+    this.CONSUME(RBracket, { LABEL: 'close' });
+  });
+
+  /** One further entry of a bracket, with the separator written before it (if any). */
+  bracketItem = this.RULE('bracketItem', () => {
+    this.OPTION(() => {
+      this.OR([
+        { ALT: () => this.CONSUME(Comma, { LABEL: 'separator' }) },
+        { ALT: () => this.CONSUME(Semicolon, { LABEL: 'separator' }) },
+        { ALT: () => this.CONSUME(Colon, { LABEL: 'separator' }) },
+      ]);
+    });
+    this.SUBRULE(this.entry);
+  });
+
+  /** One exact rational: an optional sign, a number, and optionally `/` and a denominator. */
+  entry = this.RULE('entry', () => {
+    this.OPTION(() => {
+      this.OR([
+        { ALT: () => this.CONSUME(Minus, { LABEL: 'sign' }) },
+        { ALT: () => this.CONSUME(Plus, { LABEL: 'sign' }) },
+      ]);
+    });
+    this.CONSUME(NumberLiteral, { LABEL: 'numerator' });
+    this.OPTION2(() => {
+      this.CONSUME(Slash, { LABEL: 'slash' });
+      this.CONSUME2(NumberLiteral, { LABEL: 'denominator' });
+    });
+  });
+
+  indexMap = this.RULE('indexMap', () => {
+    this.CONSUME(LBrace, { LABEL: 'open' });
+    this.SUBRULE(this.indexEntry, { LABEL: 'item' });
+    this.MANY(() => {
+      this.CONSUME(Comma);
+      this.SUBRULE2(this.indexEntry, { LABEL: 'item' });
+    });
+    this.CONSUME(RBrace, { LABEL: 'close' });
+  });
+
+  indexEntry = this.RULE('indexEntry', () => {
+    this.SUBRULE(this.indexKey, { LABEL: 'key' });
+    this.CONSUME(Colon);
+    this.SUBRULE(this.entry, { LABEL: 'value' });
+  });
+
+  /**
+   * `13` or `(1, 10)`. A name is accepted here too so that `{e12: 1}` gets
+   * the specific `syntax/bad-index-key` problem from the builder rather than a
+   * generic parse error.
+   */
+  indexKey = this.RULE('indexKey', () => {
+    this.OR([
+      { ALT: () => this.CONSUME(NumberLiteral, { LABEL: 'digits' }) },
+      {
+        ALT: () => {
+          this.CONSUME(LParen, { LABEL: 'open' });
+          this.CONSUME2(NumberLiteral, { LABEL: 'label' });
+          this.MANY(() => {
+            this.CONSUME(Comma);
+            this.CONSUME3(NumberLiteral, { LABEL: 'label' });
+          });
+          this.CONSUME(RParen, { LABEL: 'close' });
+        },
+      },
+      { ALT: () => this.CONSUME(Identifier, { LABEL: 'badName' }) },
+    ]);
+  });
+
+  rowsExpr = this.RULE('rowsExpr', () => {
+    this.CONSUME(Rows, { LABEL: 'keyword' });
+    this.SUBRULE(this.bracket, { LABEL: 'matrix' });
+  });
+
+  solutionsExpr = this.RULE('solutionsExpr', () => {
+    this.CONSUME(Solutions, { LABEL: 'keyword' });
+    this.SUBRULE(this.bracket, { LABEL: 'matrix' });
+  });
+
+  dimExpr = this.RULE('dimExpr', () => {
+    this.CONSUME(Dim, { LABEL: 'keyword' });
+    this.SUBRULE(this.primary, { LABEL: 'operand' });
+  });
+
+  /**
+   * Parses one statement's tokens. `following` is the keyword that starts the
+   * next statement (undefined at the end of the file); messages use it to say
+   * what was found where the statement stopped.
+   */
+  parseStatement(tokens: IToken[], following: IToken | undefined): CstNode | undefined {
+    this.context.statement = tokens[0];
+    this.context.following = following;
+    this.input = tokens;
+    const cst = this.statement() as CstNode | undefined;
+    return cst ?? undefined;
+  }
+}
+
+/** The one reusable parser instance (Chevrotain parsers are expensive to build and cheap to reuse). */
+export const statementParser = new StatementParser({ statement: undefined, following: undefined });

@@ -1,0 +1,297 @@
+/**
+ * Evaluation of a whole program, statement by statement in source order, into
+ * results and problems. A statement that fails reports one problem and leaves
+ * its name bound to nothing, so later uses stay quiet instead of cascading.
+ */
+import { fieldByName, type AnyField } from '../engine/fields.js';
+import { QQ } from '../engine/rational.js';
+import { NotPrimeError } from '../engine/prime-field.js';
+import { fromVector, isZeroMV } from '../engine/multivector.js';
+import type { ClaimStmt, DeclStmt, FieldStmt, NormalizeStmt, Program, ShowStmt, SpaceStmt } from './ast.js';
+import { checkClaim } from './claims.js';
+import type { Convention } from './conventions.js';
+import { conventionSentence } from './conventions.js';
+import type { Environment } from './environment.js';
+import { evaluate } from './expressions.js';
+import { Failure, Poisoned, fail } from './failure.js';
+import { presentSpace, presentValue, type Presented } from './present.js';
+import type { Limits, Normalization, Problem, Result, ResultKind, Span } from './types.js';
+import { describeValue, type SpaceInfo, type Value } from './values.js';
+
+const NORMALIZATIONS: readonly Normalization[] = ['raw', 'first-one', 'primitive'];
+
+export interface ProgramOutcome {
+  results: Result[];
+  problems: Problem[];
+}
+
+function result(kind: ResultKind, span: Span, anchor: Span, title: string, p: Presented, name?: string): Result {
+  return {
+    kind,
+    ...(name !== undefined ? { name } : {}),
+    span,
+    anchor,
+    summary: p.summary,
+    hover: `${title}\n\n${p.hover}`,
+    latex: p.latex,
+    json: p.json,
+  };
+}
+
+/** The field: from the first `field` statement, QQ when there is none. */
+function chooseField(program: Program, problems: Problem[]): { field: AnyField; statement?: FieldStmt } {
+  const statements = program.statements.filter((s): s is FieldStmt => s.type === 'field');
+  let chosen: { field: AnyField; statement?: FieldStmt } = { field: QQ };
+  statements.forEach((s, i) => {
+    let field: AnyField;
+    try {
+      field = fieldOf(s);
+    } catch (err) {
+      if (err instanceof Failure) problems.push(err.problem);
+      return;
+    }
+    if (i === 0 || !chosen.statement) {
+      chosen = { field, statement: s };
+    } else if (field.name !== chosen.field.name) {
+      problems.push({
+        code: 'type/mixed-fields',
+        severity: 'error',
+        message: `this file already computes over ${chosen.field.name}; one file works over one field (found ${field.name} here)`,
+        span: s.span,
+        related: [{ span: chosen.statement.span, message: `the field ${chosen.field.name} is chosen here` }],
+      });
+    } else {
+      problems.push({ code: 'type/duplicate-field', severity: 'warning', message: `the field is already ${field.name}`, span: s.span });
+    }
+  });
+  return chosen;
+}
+
+function fieldOf(s: FieldStmt): AnyField {
+  const name = s.name.name;
+  if (name === 'QQ') {
+    if (s.modulus) fail('type/unknown-field', s.span, 'QQ takes no modulus; for a prime field write GF(p)');
+    return QQ;
+  }
+  if (name === 'GF') {
+    if (!s.modulus) fail('type/unknown-field', s.name.span, 'GF needs a prime: GF(p), e.g. GF(7)');
+    if (!/^\d+$/.test(s.modulus.text)) fail('type/unknown-field', s.modulus.span, `the modulus of GF must be a whole number, found ${s.modulus.text}`);
+    try {
+      return fieldByName('GF', BigInt(s.modulus.text));
+    } catch (err) {
+      if (err instanceof NotPrimeError) {
+        fail('math/not-prime', s.modulus.span, `GF(${s.modulus.text}): ${s.modulus.text} is not a prime; prime fields GF(p) need a prime p`);
+      }
+      throw err;
+    }
+  }
+  fail('type/unknown-field', s.name.span, `unknown field '${name}': write QQ (the rationals) or GF(p) for a prime p`);
+}
+
+function chooseNormalization(program: Program, fallback: Normalization, problems: Problem[]): Normalization {
+  const statements = program.statements.filter((s): s is NormalizeStmt => s.type === 'normalize');
+  let chosen: Normalization | undefined;
+  for (const s of statements) {
+    const mode = s.mode.name as Normalization;
+    if (!NORMALIZATIONS.includes(mode)) {
+      problems.push({
+        code: 'type/unknown-normalization',
+        severity: 'error',
+        message: `unknown normalization '${s.mode.name}': choose raw, first-one or primitive`,
+        span: s.mode.span,
+      });
+    } else if (chosen === undefined) {
+      chosen = mode;
+    } else if (chosen !== mode) {
+      problems.push({ code: 'type/duplicate-convention', severity: 'error', message: `the normalization is already ${chosen}; a file has one`, span: s.span });
+    }
+  }
+  return chosen ?? fallback;
+}
+
+class ProgramEvaluator {
+  readonly results: Result[] = [];
+
+  constructor(
+    readonly env: Environment,
+    readonly source: string,
+  ) {}
+
+  run(program: Program): void {
+    for (const s of program.statements) {
+      try {
+        this.statement(s);
+      } catch (err) {
+        if (s.type === 'decl') this.env.bindings.set(s.name.name, { value: undefined, declSpan: s.span, nameSpan: s.name.span });
+        if (err instanceof Failure) this.env.problems.push(err.problem);
+        else if (!(err instanceof Poisoned)) this.env.problems.push(internalProblem(err, s.span));
+      }
+    }
+  }
+
+  private statement(s: Program['statements'][number]): void {
+    switch (s.type) {
+      case 'field':
+      case 'normalize':
+        return;
+      case 'space':
+        return this.space(s);
+      case 'decl':
+        return this.declaration(s);
+      case 'claim':
+        return this.claim(s);
+      case 'show':
+        return this.show(s);
+    }
+  }
+
+  private space(s: SpaceStmt): void {
+    const dim = Number(s.dim.text);
+    if (!/^\d+$/.test(s.dim.text) || dim < 1) fail('type/bad-dimension', s.dim.span, `a dimension is a whole number of at least 1, found ${s.dim.text}`);
+    if (dim > this.env.limits.maxDimension) {
+      fail('limit/dimension', s.dim.span, `dimension ${dim} is above the limit of ${this.env.limits.maxDimension}`);
+    }
+    if (s.basis && s.basis.length !== dim) {
+      fail('type/basis-count', s.basis.length ? { start: s.basis[0]!.span.start, end: s.basis[s.basis.length - 1]!.span.end } : s.span, `a ${dim}-dimensional space needs ${dim} basis names, found ${s.basis.length}`);
+    }
+    if (this.env.spaces.has(s.name.name)) return; // reported by name resolution
+    const space: SpaceInfo = {
+      name: s.name.name,
+      dim,
+      basisNames: s.basis ? s.basis.map((b) => b.name) : Array.from({ length: dim }, (_, i) => `e${i + 1}`),
+      namedBasis: !!s.basis,
+      declaration: s.span,
+    };
+    this.env.spaces.set(space.name, space);
+    this.results.push(result('space', s.span, s.name.span, `**space ${space.name}**`, presentSpace(this.env, space), space.name));
+  }
+
+  private declaration(s: DeclStmt): void {
+    if (this.env.bindings.has(s.name.name) || this.env.spaces.has(s.name.name)) {
+      // A duplicate was reported by name resolution; keep the first binding.
+      return;
+    }
+    let space: SpaceInfo | undefined;
+    if (s.inSpace) {
+      space = this.env.spaces.get(s.inSpace.name);
+      if (!space) throw new Poisoned();
+    }
+    let value = evaluate(this.env, s.value, space ? { space } : {});
+    value = coerce(this.env, value, s);
+    const valueSpace = 'space' in value ? value.space : undefined;
+    if (space && valueSpace && valueSpace.name !== space.name) {
+      fail('type/space-mismatch', s.inSpace!.span, `the value is ${describeValue(value)}, not of ${space.name}`);
+    }
+    this.env.bindings.set(s.name.name, { value, declSpan: s.span, nameSpan: s.name.span });
+    if (value.t === 'multivector' && isZeroMV(value.mv)) {
+      this.env.problems.push({
+        code: 'math/zero-multivector',
+        severity: 'warning',
+        message: `${s.name.name} is the zero multivector: it is no point of projective space and comes from no subspace`,
+        span: s.value.span,
+      });
+    }
+    const p = presentValue(this.env, value);
+    const title = `**${s.declKind} ${s.name.name}**`;
+    this.results.push(result(s.declKind, s.span, s.name.span, title, { ...p, summary: `${s.name.name}: ${p.summary}` }, s.name.name));
+  }
+
+  private claim(s: ClaimStmt): void {
+    const outcome = checkClaim(this.env, this.source, s);
+    const summary = outcome.holds ? `✓ holds: ${outcome.found}` : `✗ false: ${outcome.found}`;
+    if (!outcome.holds) {
+      this.env.problems.push({
+        code: outcome.code,
+        severity: 'error',
+        message: `the claim '${outcome.claimed}' is false: ${outcome.found}`,
+        span: s.span,
+      });
+    }
+    const hover = [
+      `**claim** \`${outcome.claimed}\` — ${outcome.holds ? '**holds**' : '**false**'}`,
+      '',
+      outcome.found,
+      '',
+      conventionSentence(this.env.convention),
+    ].join('\n');
+    this.results.push({
+      kind: 'claim',
+      span: s.span,
+      anchor: s.keyword,
+      summary,
+      hover,
+      latex: outcome.latex,
+      json: { claim: outcome.claimed, holds: outcome.holds, found: outcome.found, ...(outcome.holds ? {} : { code: outcome.code }) },
+    });
+  }
+
+  private show(s: ShowStmt): void {
+    const value = evaluate(this.env, s.value, {});
+    const text = this.source.slice(s.value.span.start, s.value.span.end).replace(/\s+/g, ' ');
+    const p = presentValue(this.env, value);
+    this.results.push(result('show', s.span, s.keyword, `**show** \`${text}\``, { ...p, summary: `${text} = ${p.summary}` }));
+    // A hover on the shown expression itself answers too.
+    this.results.push(result('show', s.span, s.value.span, `**show** \`${text}\``, p));
+  }
+}
+
+/** What a declaration's keyword promises, checked and converted. */
+function coerce(env: Environment, value: Value, s: DeclStmt): Value {
+  switch (s.declKind) {
+    case 'vector':
+      if (value.t === 'vector') return value;
+      if (value.t === 'multivector' && value.mv.k === 1) {
+        const coords = new Array(value.space.dim).fill(env.F.zero);
+        for (const t of value.mv.terms.values()) coords[t.subset[0]!] = t.coeff;
+        return { t: 'vector', space: value.space, coords };
+      }
+      break;
+    case 'subspace':
+      if (value.t === 'subspace') return value;
+      if (value.t === 'multivector') {
+        fail('type/declared-kind', s.value.span, `${s.name.name} is declared a subspace but the value is ${describeValue(value)}; recover(…) gives the subspace of a decomposable multivector`);
+      }
+      break;
+    case 'multivector':
+      if (value.t === 'multivector') return value;
+      if (value.t === 'vector') return { t: 'multivector', space: value.space, mv: fromVector(env.F, value.coords) };
+      if (value.t === 'subspace') {
+        fail('type/declared-kind', s.value.span, `${s.name.name} is declared a multivector but the value is ${describeValue(value)}; plucker(…) gives its Plücker vector`);
+      }
+      break;
+  }
+  fail('type/declared-kind', s.value.span, `${s.name.name} is declared a ${s.declKind} but the value is ${describeValue(value)}`);
+}
+
+function internalProblem(err: unknown, span: Span): Problem {
+  const message = err instanceof Error ? err.message : String(err);
+  return {
+    code: 'internal/error',
+    severity: 'error',
+    message: `internal error while evaluating this statement (please report it): ${message}`,
+    span,
+  };
+}
+
+export function evaluateProgram(
+  program: Program,
+  source: string,
+  defaults: { normalization: Normalization; limits: Limits },
+): ProgramOutcome {
+  const problems: Problem[] = [];
+  const { field } = chooseField(program, problems);
+  const normalization = chooseNormalization(program, defaults.normalization, problems);
+  const convention: Convention = { field, normalization, order: 'lex', firstLabel: 1, layout: 'rows' };
+  const env: Environment = {
+    F: field,
+    source,
+    convention,
+    limits: defaults.limits,
+    spaces: new Map(),
+    bindings: new Map(),
+    problems,
+  };
+  const evaluator = new ProgramEvaluator(env, source);
+  evaluator.run(program);
+  return { results: evaluator.results, problems };
+}
