@@ -113,11 +113,15 @@ export function jsonReport(version: string, files: readonly CheckedFile[]): Json
           range: range(p.span),
           related: (p.related ?? []).map((r) => ({ message: r.message, range: range(r.span) })),
         })),
-        results: analysis.results.map((r) => {
-          const result: JsonResult = { kind: r.kind, range: range(r.span), summary: r.summary, json: r.json };
-          if (r.name !== undefined) result.name = r.name;
-          return result;
-        }),
+        results: analysis.results.map(
+          (r): JsonResult => ({
+            kind: r.kind,
+            ...(r.name !== undefined ? { name: r.name } : {}),
+            range: range(r.span),
+            summary: r.summary,
+            json: r.json,
+          }),
+        ),
       };
     }),
   };

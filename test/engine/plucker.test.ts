@@ -72,6 +72,17 @@ describe('Plücker coordinates over QQ against mathjs determinants (independent 
     }
   }
 
+  test('the generic elimination path agrees too (a copy of QQ that is not QQ itself; mathjs det)', () => {
+    const generic = { ...QQ };
+    fc.assert(
+      fc.property(fc.oneof(matrixOf(fractionEntry, 3, 6), degenerate(sparseEntry, 3, 6)), (rows) => {
+        const p = pluckerCoordinates(generic, rows, 6);
+        bruteSubsets(6, 3).forEach((cols, r) => assert.ok(QQ.eq(p[r]!, mathjsDeterminant(columnsOf(rows, cols)))));
+      }),
+      { numRuns: 30 },
+    );
+  });
+
   test('k = 0 gives [1] and k > n gives no coordinates (empty determinant is 1; common practice, no source)', () => {
     assert.deepEqual(pluckerCoordinates(QQ, [], 3), [QQ.one]);
     assert.deepEqual(pluckerCoordinates(QQ, [[QQ.one], [QQ.one]], 1), []);

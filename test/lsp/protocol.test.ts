@@ -8,8 +8,16 @@
  */
 import { after, before, describe, test } from 'node:test';
 import assert from 'node:assert/strict';
+import { fork } from 'node:child_process';
+import { join } from 'node:path';
 import {
   CodeLensRequest,
+  createProtocolConnection,
+  ExitNotification,
+  InitializeRequest,
+  IPCMessageReader,
+  IPCMessageWriter,
+  ShutdownRequest,
   DidChangeConfigurationNotification,
   DidChangeTextDocumentNotification,
   DidCloseTextDocumentNotification,
@@ -22,7 +30,7 @@ import {
   type Position,
   type TextDocumentSyncOptions,
 } from 'vscode-languageserver-protocol/node';
-import { assertBundleIsFresh } from '../support/bundles.js';
+import { assertBundleIsFresh, ROOT } from '../support/bundles.js';
 import { startServerSession, type ServerSession } from './server-process.js';
 
 // Two coordinate vectors of a 4-dimensional space span a plane: dim L = 2, so `claim dim L = 3` is
@@ -289,4 +297,33 @@ describe('language server over stdio, evaluating while typing', { timeout: 30_00
   test('shutdown then exit ends the server with status 0', async () => {
     assert.equal(await session.shutdown(), 0, `server stderr: ${session.stderr()}`);
   });
+});
+
+describe('language server over Node IPC, as the editor starts it', { timeout: 30_000 }, () => {
+  before(() => assertBundleIsFresh('dist/server.cjs', ['server/src']));
+
+  // The editor's client forks the server with `--node-ipc`; a plain fork (no flag) must work the same.
+  for (const args of [['--node-ipc'], []]) {
+    test(`initializes and shuts down cleanly when forked with [${args.join(' ')}]`, async () => {
+      const child = fork(join(ROOT, 'dist/server.cjs'), args, { cwd: ROOT, stdio: ['ignore', 'ignore', 'pipe', 'ipc'] });
+      const exited = new Promise<number | null>((resolve) => child.on('exit', (code) => resolve(code)));
+      const connection = createProtocolConnection(new IPCMessageReader(child), new IPCMessageWriter(child));
+      connection.listen();
+      try {
+        const result = await connection.sendRequest(InitializeRequest.type, {
+          processId: process.pid,
+          rootUri: null,
+          workspaceFolders: null,
+          capabilities: {},
+        });
+        assert.equal(result.capabilities.hoverProvider, true);
+        await connection.sendRequest(ShutdownRequest.type);
+        await connection.sendNotification(ExitNotification.type);
+        assert.equal(await exited, 0);
+      } finally {
+        connection.dispose();
+        if (child.exitCode === null && child.signalCode === null) child.kill();
+      }
+    });
+  }
 });

@@ -17,7 +17,7 @@
 import type { Field } from './field.js';
 import { coordinatesIn, kernel, rref } from './matrix.js';
 import { coefficient, fromVector, sortedTerms, wedge, type Multivector } from './multivector.js';
-import { checkSubset, complement, insertIndex, subsetKey, wedgeSign } from './subsets.js';
+import { checkSubset, complement, insertIndex, subsetKey } from './subsets.js';
 
 export type Decomposition<T> =
   | { kind: 'zero' }
@@ -46,14 +46,15 @@ export interface FailedRelation<T> {
   value: T;
 }
 
-/** Rows are reduced whenever this many have been collected beyond the current rank, keeping memory at O(n²). */
+/** Rows are reduced whenever this many times n have been collected, keeping memory at O(n²). */
 const BATCH_FACTOR = 4;
 
 /**
  * The RREF of the span of the rows produced by `emit`, reducing in batches so
- * that a long stream of rows never has to be held at once.
+ * that a long stream of rows never has to be held at once. `push` returns
+ * false once the span is the whole space, so that `emit` can stop early.
  */
-function spanOfStream<T>(F: Field<T>, n: number, emit: (push: (row: T[]) => void) => void): T[][] {
+function spanOfStream<T>(F: Field<T>, n: number, emit: (push: (row: T[]) => boolean) => void): T[][] {
   let basis: T[][] = [];
   let buffer: T[][] = [];
   const flush = () => {
@@ -62,8 +63,10 @@ function spanOfStream<T>(F: Field<T>, n: number, emit: (push: (row: T[]) => void
     buffer = [];
   };
   emit((row) => {
+    if (basis.length === n) return false;
     buffer.push(row);
     if (buffer.length >= BATCH_FACTOR * Math.max(n, 1)) flush();
+    return basis.length < n;
   });
   flush();
   return basis;
@@ -74,27 +77,29 @@ function spanOfStream<T>(F: Field<T>, n: number, emit: (push: (row: T[]) => void
  *
  * The map v ↦ v ∧ ω sends e_i to Σ_K c_K · e_i ∧ e_K, and e_i ∧ e_K is
  * wedgeSign([i], K) · e_{K∪{i}} for i ∉ K. Its matrix has one row per
- * (k+1)-subset that occurs and is built from the terms of ω alone; D(ω) is its
- * kernel. For ω = 0 this is the whole space.
+ * (k+1)-subset J = K ∪ {i} that occurs, built from the terms of ω alone and
+ * streamed into a running row reduction that stops once the rank is n; D(ω)
+ * is its kernel. For ω = 0 this is the whole space.
  */
 export function divisorSpace<T>(F: Field<T>, mv: Multivector<T>): T[][] {
   const { n } = mv;
-  const rows = new Map<string, T[]>();
-  for (const { subset, coeff } of mv.terms.values()) {
-    for (const i of complement(subset, n)) {
-      const { sorted } = insertIndex(subset, i);
-      const key = subsetKey(sorted);
-      let row = rows.get(key);
-      if (row === undefined) {
-        row = new Array<T>(n).fill(F.zero);
-        rows.set(key, row);
-      }
-      const c = wedgeSign([i], subset) === 1 ? coeff : F.neg(coeff);
-      row[i] = F.add(row[i]!, c);
-    }
-  }
+  const seen = new Set<string>();
   const reduced = spanOfStream(F, n, (push) => {
-    for (const row of rows.values()) push(row);
+    for (const { subset } of sortedTerms(mv)) {
+      for (const i of complement(subset, n)) {
+        const { sorted: J } = insertIndex(subset, i);
+        const key = subsetKey(J);
+        if (seen.has(key)) continue;
+        seen.add(key);
+        // Row J: column x ∈ J gets the coefficient of e_x ∧ e_{J∖x} = (−1)^(position of x in J) e_J.
+        const row = new Array<T>(n).fill(F.zero);
+        J.forEach((x, position) => {
+          const t = mv.terms.get(subsetKey(J.filter((_, s) => s !== position)));
+          if (t !== undefined) row[x] = position % 2 === 0 ? t.coeff : F.neg(t.coeff);
+        });
+        if (!push(row)) return;
+      }
+    }
   });
   return rref(F, kernel(F, reduced, n), n).rows;
 }
@@ -147,49 +152,70 @@ export function evaluateRelation<T>(
   return { left: left.slice(), right: right.slice(), terms, value };
 }
 
-/** The contraction u_I = Σ_{j ∉ I} p(I, j) e_j of ω by e*_I (see `evaluateRelation`). */
-function contraction<T>(F: Field<T>, mv: Multivector<T>, left: readonly number[]): T[] {
-  const u = new Array<T>(mv.n).fill(F.zero);
-  for (const j of complement(left, mv.n)) {
-    const { sorted, sign } = insertIndex(left, j);
-    const t = mv.terms.get(subsetKey(sorted));
-    if (t !== undefined) u[j] = sign === 1 ? t.coeff : F.neg(t.coeff);
-  }
-  return u;
+/** A (k−1)-subset I with the contraction u_I = Σ_{j ∉ I} p(I, j) e_j of ω by e*_I (see `evaluateRelation`). */
+interface Contraction<T> {
+  left: number[];
+  u: T[];
 }
 
 /**
- * The (k−1)-subsets of the terms' subsets, the terms taken in lexicographic
- * order: every I with u_I ≠ 0 is among them, since p(I, j) ≠ 0 needs I ∪ {j}
- * to be a term.
+ * Every nonzero contraction u_I, keyed by subsetKey(I), built in one pass over
+ * the terms: a term p_K contributes p(K ∖ {k_r}, k_r) = (−1)^(k−1−r) p_K to
+ * u_{K∖{k_r}} in column k_r, and every nonzero p(I, j) arises so, once. The
+ * terms are taken in lexicographic order and, within a term, the last index
+ * is dropped first, so the first entry for e_0∧e_1 + … gives the textbook
+ * relation. Cost: k map updates per term.
  */
-function* candidateLeftSets<T>(mv: Multivector<T>): Generator<number[]> {
-  const seen = new Set<string>();
-  for (const { subset } of sortedTerms(mv)) {
-    // Dropping the last index first makes the first candidate for e_0∧e_1 + … the textbook relation.
-    for (let r = subset.length - 1; r >= 0; r--) {
+function contractionTable<T>(F: Field<T>, mv: Multivector<T>): Map<string, Contraction<T>> {
+  const table = new Map<string, Contraction<T>>();
+  for (const { subset, coeff } of sortedTerms(mv)) {
+    const k = subset.length;
+    for (let r = k - 1; r >= 0; r--) {
       const left = subset.filter((_, s) => s !== r);
       const key = subsetKey(left);
-      if (seen.has(key)) continue;
-      seen.add(key);
-      yield left;
+      let entry = table.get(key);
+      if (entry === undefined) {
+        entry = { left, u: new Array<T>(mv.n).fill(F.zero) };
+        table.set(key, entry);
+      }
+      entry.u[subset[r]!] = (k - 1 - r) % 2 === 0 ? coeff : F.neg(coeff);
     }
   }
+  return table;
+}
+
+/** The search of `findFailedRelation`, on a contraction table already built. */
+function failedRelationIn<T>(
+  F: Field<T>,
+  mv: Multivector<T>,
+  table: Map<string, Contraction<T>>,
+  divisorBasis: T[][],
+): FailedRelation<T> | undefined {
+  if (mv.k < 2) return undefined;
+  for (const { left, u } of table.values()) {
+    if (coordinatesIn(F, divisorBasis, u) !== undefined) continue;
+    const product = sortedTerms(wedge(F, fromVector(F, u), mv));
+    // u lies outside D(ω), so u ∧ ω ≠ 0 and the first term exists.
+    return evaluateRelation(F, mv, left, product[0]!.subset);
+  }
+  return undefined;
 }
 
 /**
  * A Plücker relation that fails at ω, or undefined when ω is decomposable or
  * zero. `divisorBasis` may be passed when already known.
  *
- * Why the search over `candidateLeftSets` always succeeds for non-decomposable
- * ω: the contractions u_I span the smallest subspace W with ω ∈ ∧^k W (if ω
- * had a term outside ∧^k W in a basis adapted to W, contracting by the other
- * k−1 of its indices would give a vector with a component outside W). The
- * relation (I, J) is the e_J-coefficient of u_I ∧ ω, so if all relations held,
- * every u_I would lie in D(ω), giving W ⊆ D(ω) and dim W ≤ k; then ∧^k W is a
- * line and ω is decomposable. So some u_I lies outside D(ω), and any J with
- * nonzero coefficient in u_I ∧ ω gives a failing relation. The cost is one
- * membership test per candidate (at most k per term) and one wedge at the end.
+ * The candidates for I are the (k−1)-subsets of the terms' subsets: every I
+ * with u_I ≠ 0 is among them, since p(I, j) ≠ 0 needs I ∪ {j} to be a term.
+ * Why this search always succeeds for non-decomposable ω: the contractions u_I
+ * span the smallest subspace W with ω ∈ ∧^k W (if ω had a term outside ∧^k W
+ * in a basis adapted to W, contracting by the other k−1 of its indices would
+ * give a vector with a component outside W). The relation (I, J) is the
+ * e_J-coefficient of u_I ∧ ω, so if all relations held, every u_I would lie
+ * in D(ω), giving W ⊆ D(ω) and dim W ≤ k; then ∧^k W is a line and ω is
+ * decomposable. So some u_I lies outside D(ω), and any J with nonzero
+ * coefficient in u_I ∧ ω gives a failing relation. The cost is one membership
+ * test per candidate (at most k per term) and one wedge at the end.
  */
 export function findFailedRelation<T>(
   F: Field<T>,
@@ -197,15 +223,45 @@ export function findFailedRelation<T>(
   divisorBasis: T[][] = divisorSpace(F, mv),
 ): FailedRelation<T> | undefined {
   if (mv.k < 2 || mv.terms.size === 0) return undefined;
-  for (const left of candidateLeftSets(mv)) {
-    const u = contraction(F, mv, left);
-    if (coordinatesIn(F, divisorBasis, u) !== undefined) continue;
-    const product = sortedTerms(wedge(F, fromVector(F, u), mv));
-    // u lies outside D(ω), so u ∧ ω ≠ 0 and the first term exists.
-    const right = product[0]!.subset;
-    return evaluateRelation(F, mv, left, right);
+  return failedRelationIn(F, mv, contractionTable(F, mv), divisorBasis);
+}
+
+/**
+ * Whether every contraction u_I lies in the span of the k contractions
+ * u_{K∖k_r} at the term K (a basis whose columns K are p_K times the identity,
+ * up to the signs below). Since the u_I span the smallest subspace W with
+ * ω ∈ ∧^k W (see `findFailedRelation`), this holds exactly when dim W = k,
+ * that is when ω is decomposable. With row r signed to be p(K with k_r
+ * replaced by j) in column j, a vector u lies in that span exactly when
+ * p_K·u = Σ_r u[k_r]·row_r; keeping p_K as a factor instead of dividing keeps
+ * integral coordinates integral. Returns those rows, or undefined.
+ * Cost O(k·n) per candidate, at most k candidates per term.
+ */
+function chartRowsIfDecomposable<T>(
+  F: Field<T>,
+  mv: Multivector<T>,
+  table: Map<string, Contraction<T>>,
+  K: readonly number[],
+  pK: T,
+): T[][] | undefined {
+  const k = K.length;
+  const rows = K.map((_, r) => {
+    const { u } = table.get(subsetKey(K.filter((_, s) => s !== r)))!;
+    // p(I, k_r) = (−1)^(k−1−r) p_K for I = K ∖ {k_r}.
+    return (k - 1 - r) % 2 === 0 ? u : u.map((x) => F.neg(x));
+  });
+  const others = complement(K, mv.n);
+  for (const { u } of table.values()) {
+    for (const j of others) {
+      let expected = F.zero;
+      K.forEach((c, r) => {
+        const x = u[c]!;
+        if (!F.isZero(x)) expected = F.add(expected, F.mul(x, rows[r]![j]!));
+      });
+      if (!F.eq(expected, F.mul(pK, u[j]!))) return undefined;
+    }
   }
-  return undefined;
+  return rows;
 }
 
 /**
@@ -213,20 +269,28 @@ export function findFailedRelation<T>(
  * Degree 0 (a scalar), degree 1 and degree n are decomposable whenever nonzero;
  * for degree 0 the basis is empty and the scalar is ω itself.
  *
- * A decomposable ω gets the RREF basis of D(ω); the wedge of an RREF basis has
- * coordinate 1 at its pivot columns, so the scalar is ω's coefficient there.
+ * Decomposability is settled first by the cheap test
+ * `chartRowsIfDecomposable` at the first term of ω; a decomposable ω then gets
+ * the RREF of those rows, which is W = D(ω). Otherwise D(ω) is computed (its
+ * dimension is then below k) together with a failing relation. The wedge of
+ * an RREF basis has coordinate 1 at its pivot columns, so the scalar is ω's
+ * coefficient there.
  */
 export function decompose<T>(F: Field<T>, mv: Multivector<T>): Decomposition<T> {
-  if (mv.terms.size === 0) return { kind: 'zero' };
-  const divisorBasis = divisorSpace(F, mv);
-  if (divisorBasis.length === mv.k) {
-    const pivots = divisorBasis.map((row) => row.findIndex((x) => !F.isZero(x)));
-    return { kind: 'decomposable', basis: divisorBasis, scalar: coefficient(F, mv, pivots) };
+  const first = sortedTerms(mv)[0];
+  if (first === undefined) return { kind: 'zero' };
+  const table = contractionTable(F, mv);
+  const rows = chartRowsIfDecomposable(F, mv, table, first.subset, first.coeff);
+  if (rows !== undefined) {
+    const basis = rref(F, rows, mv.n).rows;
+    const pivots = basis.map((row) => row.findIndex((x) => !F.isZero(x)));
+    return { kind: 'decomposable', basis, scalar: coefficient(F, mv, pivots) };
   }
-  const relation = findFailedRelation(F, mv, divisorBasis);
-  if (relation === undefined) {
-    // Unreachable by the argument at findFailedRelation; kept as a loud guard.
-    throw new Error('decompose: no failing Plücker relation found for a non-decomposable multivector');
+  const divisorBasis = divisorSpace(F, mv);
+  const relation = failedRelationIn(F, mv, table, divisorBasis);
+  if (relation === undefined || divisorBasis.length >= mv.k) {
+    // Unreachable by the arguments above; kept as a loud guard.
+    throw new Error('decompose: the decomposability tests disagree');
   }
   return { kind: 'not-decomposable', divisorBasis, divisorDimension: divisorBasis.length, relation };
 }
@@ -239,6 +303,6 @@ export function decompose<T>(F: Field<T>, mv: Multivector<T>): Decomposition<T> 
 export function supportSpace<T>(F: Field<T>, mv: Multivector<T>): T[][] {
   return spanOfStream(F, mv.n, (push) => {
     if (mv.k === 0) return;
-    for (const left of candidateLeftSets(mv)) push(contraction(F, mv, left));
+    for (const { u } of contractionTable(F, mv).values()) if (!push(u)) return;
   });
 }

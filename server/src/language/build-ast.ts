@@ -11,9 +11,9 @@
  * The shape checks that the grammar cannot express are made here: a bracket
  * that mixes `:` with other separators (`syntax/mixed-separators`), and index
  * keys that are not label lists (`syntax/bad-index-key`). A statement with such
- * a problem is not returned. The builder never throws: a missing child or a
- * token without a real position (which the parser's settings rule out, but a
- * defensive builder does not rely on that) makes it drop the statement.
+ * a problem is not returned. A missing child, or a token without a real
+ * position (which the parser's settings rule out, but a defensive builder does
+ * not rely on that), makes it drop the statement instead of throwing.
  */
 import type { CstElement, CstNode, IToken } from 'chevrotain';
 import type {
@@ -53,18 +53,6 @@ export function tokenSpan(token: IToken): Span {
 
 function join(a: Span, b: Span): Span {
   return { start: Math.min(a.start, b.start), end: Math.max(a.end, b.end) };
-}
-
-/** The source range of a CST node: from its first to its last real token. */
-function extentOf(node: CstNode): Span | undefined {
-  let result: Span | undefined;
-  for (const elements of Object.values(node.children)) {
-    for (const element of elements) {
-      const span = isToken(element) ? (isRealToken(element) ? tokenSpan(element) : undefined) : extentOf(element);
-      if (span) result = result ? join(result, span) : span;
-    }
-  }
-  return result;
 }
 
 function tokens(node: CstNode, label: string): IToken[] {
@@ -125,12 +113,10 @@ class StatementBuilder {
     throw new Rejected();
   }
 
-  statement(cst: CstNode): Statement {
+  statement(cst: CstNode, extent: Span): Statement {
     const [kind] = Object.keys(cst.children);
     const inner = kind ? child(cst, kind) : undefined;
     if (!inner) throw new Incomplete();
-    const extent = extentOf(inner);
-    if (!extent) throw new Incomplete();
     switch (inner.name) {
       case 'fieldStmt': {
         const keyword = token(inner, 'keyword');
@@ -201,10 +187,13 @@ class StatementBuilder {
   }
 
   private relation(node: CstNode): Relation {
-    const extent = extentOf(node);
-    if (!extent) throw new Incomplete();
     const other = optionalNode(node, 'other');
     const negated = optionalToken(node, 'not') !== undefined;
+    const first = ['not', 'equals', 'notEquals', 'in', 'notIn', 'decomposable']
+      .map((label) => optionalToken(node, label))
+      .filter((t): t is IToken => t !== undefined)
+      .sort((a, b) => a.startOffset - b.startOffset)[0];
+    if (!first) throw new Incomplete();
     let op: Relation['op'];
     if (optionalToken(node, 'equals')) op = '=';
     else if (optionalToken(node, 'notEquals')) op = '!=';
@@ -214,7 +203,9 @@ class StatementBuilder {
     else throw new Incomplete();
     const needsOther = op !== 'decomposable' && op !== 'not decomposable';
     if (needsOther !== (other !== undefined)) throw new Incomplete();
-    return { span: extent, op, ...(other ? { other: this.expression(other).node } : {}) };
+    if (!other) return { span: join(tokenSpan(first), tokenSpan(token(node, 'decomposable'))), op };
+    const built = this.expression(other);
+    return { span: join(tokenSpan(first), built.extent), op, other: built.node };
   }
 
   /** Folds `operand (op operand)*` to the left. */
@@ -480,11 +471,15 @@ class StatementBuilder {
   }
 }
 
-/** Builds one statement; never throws. */
-export function buildStatement(cst: CstNode): BuiltStatement {
+/**
+ * Builds one statement whose source range (keyword to last token) is `span`.
+ * A missing part or a shape problem drops the statement; only a bug in the
+ * builder itself can throw, and `parse.ts` contains that.
+ */
+export function buildStatement(cst: CstNode, span: Span): BuiltStatement {
   const builder = new StatementBuilder();
   try {
-    return { statement: builder.statement(cst), problems: builder.problems };
+    return { statement: builder.statement(cst, span), problems: builder.problems };
   } catch (error) {
     if (error instanceof Incomplete || error instanceof Rejected) {
       return { statement: undefined, problems: builder.problems };

@@ -5,14 +5,15 @@
 import { coordinatesIn, rref } from '../engine/matrix.js';
 import { equalsMV, fromVector, isZeroMV, toDense } from '../engine/multivector.js';
 import { normalizePoint, projectivelyEqual } from '../engine/normalize.js';
-import { binomial } from '../engine/subsets.js';
+import { binomial, unrankLex } from '../engine/subsets.js';
+import { coordinateName } from './conventions.js';
 import type { ClaimStmt } from './ast.js';
 import { decompositionOf, describeRelation, relationLatex } from './decomposition.js';
 import { subspacePlucker, type Environment } from './environment.js';
 import { checkCoordinateLimit, evaluate } from './expressions.js';
 import { fail } from './failure.js';
 import { matrixLatex } from './latex.js';
-import { formatCombination, formatMatrixInline, formatPoint, formatTuple } from './text.js';
+import { formatCombination, formatMatrixInline, formatMultivector, formatPoint, formatTuple } from './text.js';
 import { describeValue, type MultivectorValue, type Scalar, type SubspaceValue, type Value } from './values.js';
 
 export interface ClaimOutcome {
@@ -35,7 +36,13 @@ export function checkClaim(env: Environment, source: string, s: ClaimStmt): Clai
   if (op === 'decomposable' || op === 'not decomposable') {
     return decomposableClaim(env, subject, subjectText, claimed, op === 'decomposable', s);
   }
-  const other = evaluate(env, s.relation.other!, {});
+  const otherExpr = s.relation.other!;
+  // A count is compared with a whole number as written, not with its image in
+  // the field: over GF(2), `dim A = 3` must not read 3 as 1.
+  const other: Value =
+    subject.t === 'integer' && otherExpr.type === 'number' && /^\d+$/.test(otherExpr.text)
+      ? { t: 'integer', value: Number(otherExpr.text) }
+      : evaluate(env, otherExpr, {});
   const otherText = source.slice(s.relation.other!.span.start, s.relation.other!.span.end).replace(/\s+/g, ' ');
   if (op === 'in' || op === 'not in') return membershipClaim(env, subject, other, subjectText, otherText, claimed, op === 'in', s);
   return equalityClaim(env, subject, other, subjectText, otherText, claimed, op === '=', s);
@@ -145,9 +152,10 @@ function equalityClaim(
 ): ClaimOutcome {
   const F = env.F;
   const code = wanted ? 'claim/equality' : 'claim/inequality';
-  const verdict = (equal: boolean, found: string, latex = ''): ClaimOutcome => ({
+  const verdict = (equal: boolean, found: string, latex = '', specific?: string): ClaimOutcome => ({
     holds: equal === wanted,
-    code,
+    // A false `=` gets the code of what was compared; a false `!=` is always claim/inequality.
+    code: wanted && specific ? specific : code,
     claimed,
     found,
     latex,
@@ -155,13 +163,14 @@ function equalityClaim(
 
   // A count against a number: dim L = 2.
   if (subject.t === 'integer' || other.t === 'integer') {
-    const a = integerOf(env, subject);
-    const b = integerOf(env, other);
+    const a = subject.t === 'integer' ? subject.value : undefined;
+    const b = other.t === 'integer' ? other.value : undefined;
     if (a === undefined || b === undefined) {
       fail('type/operand', s.relation.span, `cannot compare ${describeValue(subject)} with ${describeValue(other)}`);
     }
     const counted = subject.t === 'integer' ? subjectText : otherText;
-    return verdict(a === b, a === b ? `${counted} = ${subject.t === 'integer' ? a : b}` : `${counted} is ${subject.t === 'integer' ? a : b}, not ${subject.t === 'integer' ? b : a}`);
+    const found = a === b ? `${counted} = ${subject.t === 'integer' ? a : b}` : `${counted} is ${subject.t === 'integer' ? a : b}, not ${subject.t === 'integer' ? b : a}`;
+    return verdict(a === b, found, '', 'claim/dimension');
   }
 
   // A projective point against a subspace or multivector: plucker(L) = [1 : 3 : …].
@@ -183,11 +192,13 @@ function equalityClaim(
     }
     const shown = normalizePoint(F, p.dense, env.convention.normalization);
     const equal = projectivelyEqual(F, p.dense, point.values);
-    if (equal) return verdict(true, `${thingText} is the projective point ${formatPoint(F, shown.values)} (${shown.mode})`);
-    const mismatch = firstMismatch(env, p.dense, point.values);
+    if (equal) return verdict(true, `${thingText} is the projective point ${formatPoint(F, shown.values)} (${shown.mode})`, '', 'claim/plucker');
+    const mismatch = firstMismatch(env, p.dense, point.values, false, (i) => coordinateName(unrankLex(i, p.n, p.k), p.n));
     return verdict(
       false,
       `${thingText} is ${formatPoint(F, shown.values)} (${shown.mode}), which is not a multiple of ${formatPoint(F, point.values)}${mismatch}`,
+      '',
+      'claim/plucker',
     );
   }
 
@@ -209,6 +220,19 @@ function equalityClaim(
     return verdict(F.eq(subject.value, other.value), `${subjectText} = ${F.format(subject.value)} and ${otherText} = ${F.format(other.value)}`);
   }
 
+  // `omega ^ omega = 0`: a vector or multivector against the scalar zero.
+  const zeroSide = other.t === 'scalar' ? other : subject.t === 'scalar' ? subject : undefined;
+  const thing = other.t === 'scalar' ? subject : other;
+  if (zeroSide && (thing.t === 'vector' || thing.t === 'multivector')) {
+    if (!F.isZero(zeroSide.value)) {
+      fail('type/operand', s.relation.span, `${describeValue(thing)} can be compared with 0, not with another scalar`);
+    }
+    const mv = asMultivectorValue(env, thing)!;
+    const zero = isZeroMV(mv.mv);
+    const thingText = other.t === 'scalar' ? subjectText : otherText;
+    return verdict(zero, zero ? `${thingText} is zero` : `${thingText} = ${formatMultivector(F, mv.mv, mv.space.basisNames)} is not zero`);
+  }
+
   const a = asMultivectorValue(env, subject);
   const b = asMultivectorValue(env, other);
   if (a && b && a.space.name === b.space.name && a.mv.k === b.mv.k) {
@@ -218,25 +242,24 @@ function equalityClaim(
   fail('type/operand', s.relation.span, `cannot compare ${describeValue(subject)} with ${describeValue(other)}`);
 }
 
-function integerOf(env: Environment, v: Value): number | undefined {
-  if (v.t === 'integer') return v.value;
-  if (v.t === 'scalar' && env.F.characteristic === 0n) {
-    const text = env.F.format(v.value);
-    return /^-?\d+$/.test(text) ? Number(text) : undefined;
-  }
-  if (v.t === 'scalar') return Number(env.F.format(v.value));
-  return undefined;
-}
-
 /** The first coordinate where two vectors fail to be proportional (or, exactly, to agree). */
-function firstMismatch(env: Environment, a: Scalar[], b: Scalar[], exact = false): string {
+function firstMismatch(
+  env: Environment,
+  a: Scalar[],
+  b: Scalar[],
+  exact = false,
+  label: (index: number) => string = (i) => `number ${i + 1}`,
+): string {
   const F = env.F;
   const i = a.findIndex((x) => !F.isZero(x));
   const j = b.findIndex((x) => !F.isZero(x));
-  if (i !== j && !exact) return `: the first nonzero coordinate is number ${i + 1} on one side and ${j + 1} on the other`;
+  if (i !== j && !exact) return `: the first nonzero coordinate is ${label(i)} on one side and ${label(j)} on the other`;
   for (let t = 0; t < a.length; t++) {
     const differs = exact ? !F.eq(a[t], b[t]) : !F.eq(F.mul(a[t], b[i]), F.mul(b[t], a[i]));
-    if (differs) return `: coordinate number ${t + 1} breaks the proportion (${F.format(a[t])} against ${F.format(b[t])})`;
+    if (differs) {
+      const how = exact ? `${F.format(a[t])} against ${F.format(b[t])}` : `its ratio to ${label(i)} is ${F.format(F.div(a[t], a[i]))} on the left and ${F.format(F.div(b[t], b[i]))} on the right`;
+      return `: coordinate ${label(t)} breaks the proportion (${how})`;
+    }
   }
   return '';
 }

@@ -181,10 +181,14 @@ class ProgramReader {
 
   /** Builds a statement that parsed; drops it if the builder finds a problem or a character could not be read. */
   private keepOrDrop(piece: IToken[], cst: Parameters<typeof buildStatement>[0], last: IToken): void {
-    const built = buildStatement(cst);
+    if (this.lexErrorIn(piece[0]!.startOffset, this.nextStart(last))) {
+      // The tokens parsed only because an unreadable character was skipped; that character is the one problem.
+      this.drop(piece);
+      return;
+    }
+    const built = buildStatement(cst, { start: piece[0]!.startOffset, end: last.endOffset! + 1 });
     this.problems.push(...built.problems);
-    const unreadable = this.lexErrorIn(piece[0]!.startOffset, this.nextStart(last));
-    if (built.statement && !unreadable) this.statements.push(built.statement);
+    if (built.statement) this.statements.push(built.statement);
     else this.drop(piece);
   }
 

@@ -79,13 +79,17 @@ const EXPRESSION_START =
   "a value (a number, a name, a call such as span(p, q), '(', '[', '{', rows, solutions or dim)";
 
 /** The "expected …" phrase of a failed CONSUME, where the rule gives a more helpful wording than the token alone. */
-function expectedPhrase(expected: TokenType, ruleName: string, previous: IToken | undefined): string {
+function expectedPhrase(
+  expected: TokenType,
+  ruleName: string,
+  previous: IToken | undefined,
+  context: MessageContext,
+): string {
   const prevType = previous?.tokenType;
   switch (ruleName) {
     case 'fieldStmt':
       if (expected === T.Identifier) return 'the name of a field (QQ for the rationals, or GF(p) for a prime p)';
       if (expected === T.NumberLiteral) return 'the prime p of GF(p)';
-      if (expected === T.RParen) return "')' to close GF(…";
       break;
     case 'normalizeStmt':
       if (prevType === T.Minus) return "the rest of the mode's name";
@@ -96,31 +100,31 @@ function expectedPhrase(expected: TokenType, ruleName: string, previous: IToken 
       if (expected === T.NumberLiteral) return 'the dimension (a whole number)';
       break;
     case 'declStmt':
-      if (expected === T.Identifier && prevType !== T.In && prevType !== T.ElementOf) return 'a name for the new object';
+      if (expected === T.Identifier && prevType !== T.In && prevType !== T.ElementOf) return `a name for the new ${context.statement?.image ?? 'object'}`;
       if (expected === T.Identifier) return 'the name of a space';
       break;
     case 'nameOrCall':
-      if (expected === T.RParen) return "',' or ')' to close the argument list";
+      if (expected === T.RParen) return "',' or the closing ')' of the argument list";
       if (expected === T.Identifier) return 'the name of a basis vector';
       break;
     case 'parenthesised':
-      if (expected === T.RParen) return "',' or ')' to close the parenthesis";
+      if (expected === T.RParen) return "',' or the closing ')'";
       break;
     case 'bracket':
-      if (expected === T.RBracket) return "another entry (a number such as 3, -1 or 1/2) or ']' to close the bracket";
+      if (expected === T.RBracket) return "another entry (a number such as 3, -1 or 1/2) or the closing ']'";
       break;
     case 'entry':
       if (expected === T.NumberLiteral && prevType === T.Slash) return 'a denominator (a number)';
       if (expected === T.NumberLiteral) return 'an entry (a number such as 3, -1 or 1/2; names and expressions are not allowed inside brackets)';
       break;
     case 'indexMap':
-      if (expected === T.RBrace) return "',' and another entry, or '}' to close the index map";
+      if (expected === T.RBrace) return "',' and another entry, or the closing '}'";
       break;
     case 'indexEntry':
       if (expected === T.Colon) return "':' and a coefficient after the index key";
       break;
     case 'indexKey':
-      if (expected === T.RParen) return "',' or ')' to close the list of labels";
+      if (expected === T.RParen) return "',' or the closing ')' of the list of labels";
       if (expected === T.NumberLiteral) return 'a label (a whole number)';
       break;
     case 'rowsExpr':
@@ -145,7 +149,7 @@ function sentence(expected: string, previous: IToken | undefined, context: Messa
 export function createErrorMessageProvider(context: MessageContext): IParserErrorMessageProvider {
   return {
     buildMismatchTokenMessage({ expected, actual, previous, ruleName }) {
-      const phrase = expectedPhrase(expected, ruleName, previous);
+      const phrase = expectedPhrase(expected, ruleName, previous, context);
       return sentence(phrase, previous, context, describeFound(actual, context)) + keywordAsNameHint(actual, expected);
     },
     buildNotAllInputParsedMessage({ firstRedundant }) {
@@ -199,6 +203,8 @@ const CHARACTER_HINTS: Record<string, string> = {
   '⟩': 'write a span as span(…)',
   '"': 'the language has no strings',
   "'": "a prime is only allowed at the end of a name, as in p'",
+  '′': "write a prime as an apostrophe, as in p'",
+  '’': "write a prime as an apostrophe, as in p'",
 };
 
 export function unexpectedCharacterMessage(characters: string): string {

@@ -67,9 +67,16 @@ export function toHover(document: TextDocument, hover: Hover): LspHover {
   };
 }
 
+/**
+ * A lens showing the result's summary; clicking it copies the result as LaTeX.
+ * A result without LaTeX (a claim's verdict) gets a lens with an empty command
+ * id, which editors show as plain text that does nothing when clicked.
+ */
 export function toCodeLens(document: TextDocument, lens: Lens): CodeLens {
+  const range = toRange(document, lens.span);
+  if (lens.latex.length === 0) return { range, command: { title: lens.title, command: '' } };
   return {
-    range: toRange(document, lens.span),
+    range,
     command: {
       title: lens.title,
       command: COPY_LATEX_COMMAND,
