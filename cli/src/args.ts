@@ -12,12 +12,12 @@ export const DEFAULT_NORMALIZATION: Normalization = 'primitive';
 export type Command =
   | { kind: 'help' }
   | { kind: 'version' }
-  | { kind: 'check'; files: string[]; json: boolean; normalization: Normalization };
+  | { kind: 'check'; files: string[]; json: boolean; results: boolean; normalization: Normalization };
 
 export class UsageError extends Error {}
 
 export const USAGE = `Usage:
-  wedgework check FILE... [--json] [--normalization raw|first-one|primitive]
+  wedgework check FILE... [--results] [--json] [--normalization raw|first-one|primitive]
   wedgework --help
   wedgework --version
 
@@ -25,6 +25,8 @@ Checks .wedge files: parses them, evaluates every statement and checks every
 claim. Files are only read, never written.
 
 Options:
+  --results          also print every result (declarations, claims, shows) as
+                     FILE:LINE:COLUMN: KIND NAME: SUMMARY
   --json             print one JSON document instead of lines (see docs/cli-json.md)
   --normalization M  how projective points are scaled when the file has no
                      \`normalize\` statement: raw, first-one or primitive
@@ -61,6 +63,7 @@ export function parseArgs(args: readonly string[]): Command {
 
   const files: string[] = [];
   let json = false;
+  let results = false;
   let normalization = DEFAULT_NORMALIZATION;
   let optionsEnded = false;
   for (let i = 0; i < rest.length; i++) {
@@ -73,6 +76,8 @@ export function parseArgs(args: readonly string[]): Command {
       return { kind: 'help' };
     } else if (arg === '--json') {
       json = true;
+    } else if (arg === '--results') {
+      results = true;
     } else if (arg === '--normalization') {
       normalization = parseNormalization(rest[++i]);
     } else if (arg.startsWith('--normalization=')) {
@@ -82,5 +87,5 @@ export function parseArgs(args: readonly string[]): Command {
     }
   }
   if (files.length === 0) throw new UsageError('check needs at least one FILE');
-  return { kind: 'check', files, json, normalization };
+  return { kind: 'check', files, json, results, normalization };
 }

@@ -4,7 +4,7 @@
  */
 import { analyze } from '../../server/src/language/index.js';
 import { parseArgs, USAGE, UsageError } from './args.js';
-import { jsonReport, problemLines, summaryLine, tally, type CheckedFile } from './report.js';
+import { jsonReport, problemLines, resultLines, summaryLine, tally, type CheckedFile } from './report.js';
 
 export interface CliIo {
   stdout(text: string): void;
@@ -71,7 +71,7 @@ export async function runCli(args: readonly string[], version: string, io: CliIo
   if (command.json) {
     io.stdout(`${JSON.stringify(jsonReport(version, checked), null, 2)}\n`);
   } else {
-    const lines = checked.flatMap(problemLines);
+    const lines = checked.flatMap((c) => (command.results ? [...resultLines(c), ...problemLines(c)] : problemLines(c)));
     lines.push(summaryLine(checked.length, counts));
     io.stdout(`${lines.join('\n')}\n`);
   }

@@ -66,6 +66,14 @@ export function problemLines(checked: CheckedFile): string[] {
   return lines;
 }
 
+/** `file:line:col: kind name: summary`, one line per result, in file order. */
+export function resultLines(checked: CheckedFile): string[] {
+  const index = new LineIndex(checked.text);
+  return checked.analysis.results
+    .filter((r) => r.kind !== 'field')
+    .map((r) => `${at(checked.file, index.position(r.span.start))}: ${r.kind}${r.name !== undefined ? ` ${r.name}` : ''}: ${oneLine(r.summary)}`);
+}
+
 export interface Tally {
   errors: number;
   warnings: number;

@@ -10,6 +10,12 @@
  * ω ∧ ω = 0 is not used: it holds trivially in odd degree and fails to detect
  * e_0∧e_1 + e_2∧e_3 in characteristic 2.
  *
+ * An equivalent criterion is cheaper to check and is tried first: the
+ * contractions u_I of ω by (k−1)-covectors span the smallest subspace W with
+ * ω ∈ ∧^k W, and ω is decomposable exactly when dim W = k (then W = D(ω)).
+ * `decompose` tests whether all u_I lie in the span of the k contractions at
+ * one term of ω, and computes D(ω) only for the not-decomposable report.
+ *
  * The witness of non-decomposability is one quadratic Plücker relation that
  * fails, see `evaluateRelation` for the sign rule and `findFailedRelation` for
  * why the search always succeeds.

@@ -226,7 +226,11 @@ export function complement(subset: readonly number[], n: number): number[] {
   return out;
 }
 
-/** The sorted subset with one index inserted, and the sign (−1)^(number of entries greater than it); sign 0 if present. */
+/**
+ * Inserts one index into a sorted subset. The sign is that of the permutation
+ * sorting (subset…, index), (−1)^(number of entries greater than index), so
+ * that e_subset ∧ e_index = sign · e_sorted; it is 0 when the index is present.
+ */
 export function insertIndex(subset: readonly number[], index: number): { sorted: number[]; sign: Sign } {
   let pos = 0;
   while (pos < subset.length && subset[pos]! < index) pos++;

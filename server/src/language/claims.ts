@@ -76,7 +76,7 @@ function decomposableClaim(
       holds: wanted,
       code,
       claimed,
-      found: `${text} is decomposable: it is ${env.F.format(d.scalar)} times the wedge of the rows of ${basis}`,
+      found: `${text} is decomposable: it is ${env.F.isOne(d.scalar) ? '' : `${env.F.format(d.scalar)} times `}the wedge of the rows of ${basis}`,
       latex: matrixLatex(env.F, d.basis),
     };
   }

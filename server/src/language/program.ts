@@ -191,9 +191,11 @@ class ProgramEvaluator {
         span: s.value.span,
       });
     }
-    const p = presentValue(this.env, value);
+    // A declared multivector is shown as one (degree, decomposability), even when it is a Plücker vector.
+    const shown = value.t === 'multivector' && value.pluckerOf ? { ...value, pluckerOf: undefined } : value;
+    const p = presentValue(this.env, shown);
     const title = `**${s.declKind} ${s.name.name}**`;
-    this.results.push(result(s.declKind, s.span, s.name.span, title, { ...p, summary: `${s.name.name}: ${p.summary}` }, s.name.name));
+    this.results.push(result(s.declKind, s.span, s.name.span, title, p, s.name.name));
   }
 
   private claim(s: ClaimStmt): void {
@@ -229,9 +231,8 @@ class ProgramEvaluator {
     const value = evaluate(this.env, s.value, {});
     const text = this.source.slice(s.value.span.start, s.value.span.end).replace(/\s+/g, ' ');
     const p = presentValue(this.env, value);
-    this.results.push(result('show', s.span, s.keyword, `**show** \`${text}\``, { ...p, summary: `${text} = ${p.summary}` }));
-    // A hover on the shown expression itself answers too.
-    this.results.push(result('show', s.span, s.value.span, `**show** \`${text}\``, p));
+    // The whole line answers a hover: the keyword and the shown expression alike.
+    this.results.push(result('show', s.span, s.span, `**show** \`${text}\``, { ...p, summary: `${text} = ${p.summary}` }));
   }
 }
 

@@ -47,7 +47,10 @@ export function describeToken(token: IToken): string {
 function describeFound(token: IToken | undefined, context: MessageContext): string {
   if (!isEof(token)) return describeToken(token!);
   const next = context.following;
-  if (next) return `'${next.image}' on line ${next.startLine}, which starts the next statement`;
+  if (next) {
+    const line = next.startLine !== context.statement?.startLine ? ` on line ${next.startLine}` : '';
+    return `'${next.image}'${line}, which starts the next statement`;
+  }
   return 'the end of the file';
 }
 
@@ -121,7 +124,7 @@ function expectedPhrase(
       if (expected === T.RBrace) return "',' and another entry, or the closing '}'";
       break;
     case 'indexEntry':
-      if (expected === T.Colon) return "':' and a coefficient after the index key";
+      if (expected === T.Colon) return "':' and a coefficient";
       break;
     case 'indexKey':
       if (expected === T.RParen) return "',' or the closing ')' of the list of labels";
@@ -143,7 +146,9 @@ function keywordAsNameHint(actual: IToken | undefined, expected: TokenType): str
 }
 
 function sentence(expected: string, previous: IToken | undefined, context: MessageContext, found: string): string {
-  return `expected ${expected}${describePrevious(previous)} in this ${statementName(context)}, found ${found}`;
+  // Right after the keyword, "in this vector declaration" would only repeat the keyword.
+  const where = previous !== undefined && previous === context.statement ? '' : ` in this ${statementName(context)}`;
+  return `expected ${expected}${describePrevious(previous)}${where}, found ${found}`;
 }
 
 export function createErrorMessageProvider(context: MessageContext): IParserErrorMessageProvider {
@@ -168,7 +173,10 @@ export function createErrorMessageProvider(context: MessageContext): IParserErro
         );
       }
       if (ruleName === 'indexKey') return sentence('an index key such as 13 or (1, 10)', previous, context, found);
-      return sentence(EXPRESSION_START, previous, context, found);
+      const signAfterWedge =
+        previous?.tokenType === T.WedgeOp && (actual[0]?.tokenType === T.Minus || actual[0]?.tokenType === T.Plus);
+      const hint = signAfterWedge ? ` (a signed factor of a wedge needs parentheses, as in e1 ^ (-e2))` : '';
+      return sentence(EXPRESSION_START, previous, context, found) + hint;
     },
     buildEarlyExitMessage({ actual, previous, ruleName }) {
       const found = describeFound(actual[0], context);
