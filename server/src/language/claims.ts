@@ -5,7 +5,7 @@
 import { coordinatesIn, rref } from '../engine/matrix.js';
 import { equalsMV, fromVector, isZeroMV, toDense } from '../engine/multivector.js';
 import { normalizePoint, projectivelyEqual } from '../engine/normalize.js';
-import { binomial, unrankLex } from '../engine/subsets.js';
+import { binomialBig, unrankLex } from '../engine/subsets.js';
 import { coordinateName } from './conventions.js';
 import type { ClaimStmt } from './ast.js';
 import { decompositionOf, describeRelation, relationLatex } from './decomposition.js';
@@ -184,7 +184,7 @@ function equalityClaim(
       fail(
         'type/wrong-length',
         (other.t === 'point' ? s.relation.other! : s.subject).span,
-        `this point has ${point.values.length} coordinates, but G(${p.k},${p.n}) has C(${p.n},${p.k}) = ${binomial(p.n, p.k)}`,
+        `this point has ${point.values.length} coordinates, but G(${p.k},${p.n}) has C(${p.n},${p.k}) = ${binomialBig(p.n, p.k)}`,
       );
     }
     if (point.values.every((x) => F.isZero(x))) {

@@ -16,7 +16,7 @@ import {
   wedge as wedgeMV,
   type Multivector,
 } from '../engine/multivector.js';
-import { binomial } from '../engine/subsets.js';
+import { binomialBig } from '../engine/subsets.js';
 import { parseRational } from '../engine/rational.js';
 import { chartCoordinates } from '../engine/chart.js';
 import type {
@@ -469,8 +469,8 @@ function arity(e: Call, n: number, signature: string): void {
 
 /** Guards against computing more Plücker coordinates than the limit allows. */
 export function checkCoordinateLimit(env: Environment, n: number, k: number, span: Span): void {
-  const count = binomial(n, k);
-  if (count > env.limits.maxCoordinates) {
+  const count = binomialBig(n, k);
+  if (count > BigInt(env.limits.maxCoordinates)) {
     fail(
       'limit/too-many-coordinates',
       span,

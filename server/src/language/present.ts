@@ -5,7 +5,7 @@
  */
 import { toDense, sortedTerms } from '../engine/multivector.js';
 import { normalizePoint } from '../engine/normalize.js';
-import { forEachSubset, binomial } from '../engine/subsets.js';
+import { forEachSubset, binomialBig } from '../engine/subsets.js';
 import { grassmannianDimension } from '../engine/grassmannian.js';
 import { conventionSentence, conventionTag, coordinateLatex, coordinateName, indexLabel } from './conventions.js';
 import { decompositionOf, describeRelation, relationFormula, relationLatex, relationValues } from './decomposition.js';
@@ -172,7 +172,7 @@ export function presentMultivector(env: Environment, v: MultivectorValue): Prese
   const terms = sortedTerms(v.mv);
   const lines: string[] = [];
   lines.push(
-    `An element of ∧^${k} ${v.space.name} (degree ${k}; C(${n},${k}) = ${binomial(n, k)} coordinates, ${terms.length} nonzero).`,
+    `An element of ∧^${k} ${v.space.name} (degree ${k}; C(${n},${k}) = ${binomialBig(n, k)} coordinates, ${terms.length} nonzero).`,
     '',
     codeBlock(formatMultivector(F, v.mv, v.space.basisNames)),
   );
@@ -315,7 +315,7 @@ export function presentValue(env: Environment, v: Value): Presented {
 /** A subspace with its Plücker vector, computed here unless the caller has it already. */
 export function presentSubspaceWithPlucker(env: Environment, w: SubspaceValue, dense?: Scalar[]): Presented {
   if (!dense) {
-    if (binomial(w.space.dim, w.basis.length) > env.limits.maxCoordinates) return presentSubspace(env, w, undefined);
+    if (binomialBig(w.space.dim, w.basis.length) > BigInt(env.limits.maxCoordinates)) return presentSubspace(env, w, undefined);
     dense = toDense(env.F, subspacePlucker(env, w));
   }
   return presentSubspace(env, w, pluckerOfSubspace(env, w, dense));

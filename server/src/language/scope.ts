@@ -49,6 +49,9 @@ class Resolver {
   /** Basis vector names: one name may belong to several spaces (e1 of V and of W). */
   private readonly basis = new Map<string, SymbolInfo[]>();
 
+  /** Names whose declarations had syntax errors: their uses are explained already. */
+  constructor(readonly broken: ReadonlySet<string>) {}
+
   declare(info: SymbolInfo): void {
     if (BUILTIN_NAMES.has(info.name) || FIELD_NAMES.has(info.name)) {
       const what = BUILTIN_NAMES.has(info.name) ? 'a built-in operation' : 'a field';
@@ -132,7 +135,7 @@ class Resolver {
       this.problems.push(
         NAME_PROBLEM('name/builtin-not-called', name.span, `'${name.name}' is a built-in operation: call it, e.g. ${BUILTINS.find((b) => b.name === name.name)!.signature}`),
       );
-    } else {
+    } else if (!this.broken.has(name.name)) {
       this.problems.push(NAME_PROBLEM('name/unknown', name.span, `'${name.name}' is not declared before this line`));
     }
   }
@@ -178,7 +181,7 @@ class Resolver {
 
 /** Resolves every name of a program in statement order. */
 export function resolveNames(program: Program): Resolution {
-  const r = new Resolver();
+  const r = new Resolver(new Set((program.dropped ?? []).flatMap((d) => (d.declares ? [d.declares.name] : []))));
   for (const s of program.statements) {
     switch (s.type) {
       case 'field':
