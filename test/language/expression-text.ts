@@ -26,6 +26,7 @@ export function prefixForm(e: Expr): string {
     case 'indexmap':
       return `{${e.entries.map((x) => `(${x.key.labels.join(',')}): ${x.value.text}`).join(', ')}}`;
     case 'rows':
+    case 'columns':
     case 'solutions':
       return `(${e.type} ${prefixForm(e.matrix)})`;
     case 'dim':

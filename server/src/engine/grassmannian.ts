@@ -1,8 +1,9 @@
 /**
  * Counting facts about Grassmannians and the exhaustive list of the
- * k-subspaces of GF(p)^n.
+ * k-subspaces of GF(q)^n, for prime fields and extension fields alike.
  */
 import type { Field } from './field.js';
+import { finiteFieldElement, finiteFieldOrder } from './finite-fields.js';
 import { subsets } from './subsets.js';
 
 /** dim G(k, n) = k(n − k): the number of free entries in a chart. */
@@ -57,24 +58,31 @@ export class EnumerationLimitError extends RangeError {
   }
 }
 
-function checkPrimeField<T>(F: Field<T>, what: string): bigint {
-  const p = F.characteristic;
-  if (p <= 0n) throw new RangeError(`${what}: needs a finite prime field, but ${F.name} is infinite`);
-  return p;
+function checkFiniteField<T>(F: Field<T>, what: string): bigint {
+  const q = finiteFieldOrder(F);
+  if (q === undefined) throw new RangeError(`${what}: needs a finite field, but ${F.name} is infinite`);
+  return q;
 }
 
+/** Fields up to this size have their elements listed once per enumeration, instead of on every step. */
+const ELEMENT_TABLE_LIMIT = 2n ** 16n;
+
 /**
- * Every k-subspace of GF(p)^n exactly once, as its RREF basis rows, lazily.
+ * Every k-subspace of GF(q)^n exactly once, as its RREF basis rows, lazily.
  * The RREF is unique, so walking each pivot set (lexicographically) and every
  * choice of its free entries (row i is free in the non-pivot columns after its
- * pivot) lists each subspace once. There are gaussianBinomial(n, k, p).
+ * pivot) lists each subspace once. Free entries run through the field's
+ * elements in the order of `finiteFieldElements`. There are
+ * gaussianBinomial(n, k, q).
  */
 export function* iterateSubspaces<T>(F: Field<T>, n: number, k: number): Generator<T[][]> {
-  const p = checkPrimeField(F, 'iterateSubspaces');
+  const q = checkFiniteField(F, 'iterateSubspaces');
   if (!Number.isInteger(n) || n < 0 || !Number.isInteger(k) || k < 0 || k > n) {
     throw new RangeError(`iterateSubspaces: need integers 0 ≤ k ≤ n, got k = ${k}, n = ${n}`);
   }
-  let elements: T[] | undefined;
+  // Each free entry is an index into the field's elements, looked up in a table for small fields.
+  const table = q <= ELEMENT_TABLE_LIMIT ? Array.from({ length: Number(q) }, (_, i) => finiteFieldElement(F, BigInt(i))) : undefined;
+  const elementAt = (i: bigint): T => (table !== undefined ? table[Number(i)]! : finiteFieldElement(F, i));
   for (const pivots of subsets(n, k)) {
     const isPivot = new Array<boolean>(n).fill(false);
     for (const c of pivots) isPivot[c] = true;
@@ -82,41 +90,37 @@ export function* iterateSubspaces<T>(F: Field<T>, n: number, k: number): Generat
     pivots.forEach((c, i) => {
       for (let j = c + 1; j < n; j++) if (!isPivot[j]) free.push([i, j]);
     });
-    const template = pivots.map((c) => {
+    const rows = pivots.map((c) => {
       const row = new Array<T>(n).fill(F.zero);
       row[c] = F.one;
       return row;
     });
-    if (free.length === 0) {
-      yield template.map((row) => row.slice());
-      continue;
-    }
-    // Free entries exist, so at least p subspaces are listed and p is small enough to tabulate.
-    elements ??= Array.from({ length: Number(p) }, (_, v) => F.fromBigInt(BigInt(v)));
-    const digits = new Array<number>(free.length).fill(0);
+    // An odometer over the free entries, last one fastest; `rows` always holds the current choice.
+    const digits = new Array<bigint>(free.length).fill(0n);
     for (;;) {
-      const rows = template.map((row) => row.slice());
-      free.forEach(([i, j], t) => {
-        rows[i]![j] = elements![digits[t]!]!;
-      });
-      yield rows;
-      // Odometer over the free entries, last digit fastest.
+      yield rows.map((row) => row.slice());
       let t = free.length - 1;
-      while (t >= 0 && digits[t] === elements.length - 1) digits[t--] = 0;
+      while (t >= 0 && digits[t] === q - 1n) {
+        digits[t] = 0n;
+        const [i, j] = free[t--]!;
+        rows[i]![j] = F.zero;
+      }
       if (t < 0) break;
       digits[t]!++;
+      const [i, j] = free[t]!;
+      rows[i]![j] = elementAt(digits[t]!);
     }
   }
 }
 
 /**
- * All k-subspaces of GF(p)^n (see `iterateSubspaces`) as an array. Throws
+ * All k-subspaces of GF(q)^n (see `iterateSubspaces`) as an array. Throws
  * `EnumerationLimitError` before doing any work when there are more than
  * `limit` of them.
  */
 export function enumerateSubspaces<T>(F: Field<T>, n: number, k: number, limit: number): T[][][] {
-  const p = checkPrimeField(F, 'enumerateSubspaces');
-  const count = gaussianBinomial(n, k, p);
+  const q = checkFiniteField(F, 'enumerateSubspaces');
+  const count = gaussianBinomial(n, k, q);
   if (count > BigInt(Math.max(0, Math.floor(limit)))) {
     throw new EnumerationLimitError(`The ${k}-dimensional subspaces of ${F.name}^${n}`, count, limit);
   }

@@ -15,3 +15,7 @@ export * from './normalize.js';
 export * from './decompose.js';
 export * from './chart.js';
 export * from './grassmannian.js';
+export * from './duality.js';
+export * from './linear-map.js';
+export * from './flags.js';
+export * from './schubert.js';

@@ -10,14 +10,17 @@ import { QQ, gcdBigInt, lcmBigInt, type Rational } from './rational.js';
  * 'primitive' (rationals only): integers with gcd 1 whose first nonzero
  * coordinate is positive.
  */
-export type Normalization = 'raw' | 'first-one' | 'primitive';
+export type Normalization = 'raw' | 'first-one' | 'primitive' | 'positive';
 
 export interface NormalizedPoint<T> {
   /** scale · input, coordinate by coordinate. */
   values: T[];
   /** The nonzero factor applied. */
   scale: T;
-  /** The normalization actually applied ('primitive' falls back to 'first-one' outside the rationals). */
+  /**
+   * The normalization actually applied: 'primitive' and 'positive' fall back to 'first-one' outside the
+   * rationals, and 'positive' to 'primitive' when the coordinates have both signs.
+   */
   mode: Normalization;
 }
 
@@ -27,12 +30,21 @@ export interface NormalizedPoint<T> {
  */
 export function normalizePoint<T>(F: Field<T>, values: readonly T[], mode: Normalization): NormalizedPoint<T> {
   const rational = (F as unknown) === QQ;
-  const applied: Normalization = mode === 'primitive' && !rational ? 'first-one' : mode;
+  // 'positive' asks for a representative with every coordinate ≥ 0 (totally nonnegative work). It exists
+  // exactly when the nonzero coordinates share one sign; it is then the primitive vector. Otherwise the
+  // primitive vector is shown, and the mode says so.
+  const oneSign = rational && sharesOneSign(values as unknown as readonly Rational[]);
+  const applied: Normalization =
+    (mode === 'primitive' || mode === 'positive') && !rational
+      ? 'first-one'
+      : mode === 'positive' && !oneSign
+        ? 'primitive'
+        : mode;
   const first = values.findIndex((x) => !F.isZero(x));
   if (applied === 'raw' || first < 0) return { values: values.slice(), scale: F.one, mode: applied };
-  if (applied === 'primitive') {
+  if (applied === 'primitive' || applied === 'positive') {
     const scale = primitiveScale(values as unknown as readonly Rational[], first) as unknown as T;
-    return { values: values.map((x) => F.mul(scale, x)), scale, mode: 'primitive' };
+    return { values: values.map((x) => F.mul(scale, x)), scale, mode: applied };
   }
   const scale = F.inv(values[first]!);
   return { values: values.map((x) => F.mul(scale, x)), scale, mode: 'first-one' };
@@ -50,6 +62,17 @@ function primitiveScale(values: readonly Rational[], first: number): Rational {
   for (const x of values) if (x.num !== 0n) g = gcdBigInt(g, (x.num * l) / x.den);
   const sign = values[first]!.num < 0n ? -1n : 1n;
   return QQ.fromRational(sign * l, g);
+}
+
+/** Whether the nonzero entries all have one sign. */
+function sharesOneSign(values: readonly Rational[]): boolean {
+  let positive = false;
+  let negative = false;
+  for (const x of values) {
+    if (x.num > 0n) positive = true;
+    else if (x.num < 0n) negative = true;
+  }
+  return !(positive && negative);
 }
 
 /** Both vectors are nonzero, of the same length, and each is a scalar multiple of the other. */

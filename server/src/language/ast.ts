@@ -31,12 +31,57 @@ export interface Program {
 export interface DroppedStatement {
   span: Span;
   keyword: Span;
-  kind: 'field' | 'normalize' | 'space' | 'vector' | 'subspace' | 'multivector' | 'claim' | 'show';
+  kind: 'field' | 'normalize' | 'space' | 'vector' | 'subspace' | 'multivector' | 'claim' | 'show' | 'convention' | 'map' | 'flag';
   /** The name the statement would have declared (space and vector/subspace/multivector declarations), if it was read. */
   declares?: Ident;
 }
 
-export type Statement = FieldStmt | NormalizeStmt | SpaceStmt | DeclStmt | ClaimStmt | ShowStmt;
+export type Statement =
+  | FieldStmt
+  | NormalizeStmt
+  | SpaceStmt
+  | DeclStmt
+  | ClaimStmt
+  | ShowStmt
+  | ConventionStmt
+  | MapStmt
+  | FlagStmt;
+
+/** One `key value` pair of a convention statement; hyphenated values are joined (`direction-moment`). */
+export interface ConventionSetting {
+  span: Span;
+  key: Ident;
+  value: Ident;
+}
+
+/** `convention order colex labels 0 layout columns`. */
+export interface ConventionStmt {
+  type: 'convention';
+  span: Span;
+  keyword: Span;
+  settings: ConventionSetting[];
+}
+
+/** `map f : V -> U = <matrix>`. */
+export interface MapStmt {
+  type: 'map';
+  span: Span;
+  keyword: Span;
+  name: Ident;
+  from: Ident;
+  to: Ident;
+  value: Expr;
+}
+
+/** `flag F = (v1, …, vn)` or `flag F = standard(V)`, with an optional `in V`. */
+export interface FlagStmt {
+  type: 'flag';
+  span: Span;
+  keyword: Span;
+  name: Ident;
+  value: Expr;
+  inSpace?: Ident;
+}
 
 /** `field QQ`, `field GF(7)`; the name and modulus are validated by the evaluator. */
 export interface FieldStmt {
@@ -92,8 +137,10 @@ export interface ClaimStmt {
  */
 export interface Relation {
   span: Span;
-  op: '=' | '!=' | 'in' | 'not in' | 'decomposable' | 'not decomposable';
+  op: '=' | '!=' | 'in' | 'not in' | 'decomposable' | 'not decomposable' | 'is' | 'is not';
   other?: Expr;
+  /** For `is` and `is not`: the property, its words joined by '-' (`totally-nonnegative`). */
+  property?: Ident;
 }
 
 /** `show <expression>`. */
@@ -115,6 +162,7 @@ export type Expr =
   | PointLit
   | IndexMapLit
   | RowsExpr
+  | ColumnsExpr
   | SolutionsExpr
   | DimExpr;
 
@@ -214,6 +262,14 @@ export interface RowsExpr {
 }
 
 /** `solutions [ … ]`: the solution space of a homogeneous system. */
+/** `columns [ … ]`: the span of the matrix's columns. */
+export interface ColumnsExpr {
+  type: 'columns';
+  span: Span;
+  keyword: Span;
+  matrix: MatrixLit;
+}
+
 export interface SolutionsExpr {
   type: 'solutions';
   span: Span;

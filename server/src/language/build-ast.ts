@@ -174,6 +174,44 @@ class StatementBuilder {
           subject: this.expression(child(inner, 'subject')).node,
           relation: this.relation(child(inner, 'relation')),
         };
+      case 'conventionStmt':
+        return {
+          type: 'convention',
+          span: extent,
+          keyword: tokenSpan(token(inner, 'keyword')),
+          settings: nodes(inner, 'setting').map((n) => {
+            const key = token(n, 'key');
+            const words = tokens(n, 'word');
+            if (words.length === 0) throw new Incomplete();
+            const valueSpan = join(tokenSpan(words[0]!), tokenSpan(words[words.length - 1]!));
+            return {
+              span: join(tokenSpan(key), valueSpan),
+              key: ident(key),
+              value: { span: valueSpan, name: words.map((w) => w.image).join('-') },
+            };
+          }),
+        };
+      case 'mapStmt':
+        return {
+          type: 'map',
+          span: extent,
+          keyword: tokenSpan(token(inner, 'keyword')),
+          name: ident(token(inner, 'name')),
+          from: ident(token(inner, 'from')),
+          to: ident(token(inner, 'to')),
+          value: this.expression(child(inner, 'value')).node,
+        };
+      case 'flagStmt': {
+        const inSpace = optionalToken(inner, 'inSpace');
+        return {
+          type: 'flag',
+          span: extent,
+          keyword: tokenSpan(token(inner, 'keyword')),
+          name: ident(token(inner, 'name')),
+          value: this.expression(child(inner, 'value')).node,
+          ...(inSpace ? { inSpace: ident(inSpace) } : {}),
+        };
+      }
       case 'showStmt':
         return {
           type: 'show',
@@ -189,6 +227,17 @@ class StatementBuilder {
   private relation(node: CstNode): Relation {
     const other = optionalNode(node, 'other');
     const negated = optionalToken(node, 'not') !== undefined;
+    const isToken = optionalToken(node, 'is');
+    if (isToken) {
+      const words = tokens(node, 'property');
+      if (words.length === 0) throw new Incomplete();
+      const span = join(tokenSpan(words[0]!), tokenSpan(words[words.length - 1]!));
+      return {
+        span: join(tokenSpan(isToken), span),
+        op: negated ? 'is not' : 'is',
+        property: { span, name: words.map((w) => w.image.toLowerCase()).join('-') },
+      };
+    }
     const first = ['not', 'equals', 'notEquals', 'in', 'notIn', 'decomposable']
       .map((label) => optionalToken(node, label))
       .filter((t): t is IToken => t !== undefined)
@@ -303,11 +352,13 @@ class StatementBuilder {
         return { node: lit, extent: lit.span };
       }
       case 'rowsExpr':
+      case 'columnsExpr':
       case 'solutionsExpr': {
         const keyword = token(inner, 'keyword');
         const matrix = this.matrixOnly(child(inner, 'matrix'), keyword);
         const span = join(tokenSpan(keyword), matrix.span);
-        const type = inner.name === 'rowsExpr' ? ('rows' as const) : ('solutions' as const);
+        const type =
+          inner.name === 'rowsExpr' ? ('rows' as const) : inner.name === 'columnsExpr' ? ('columns' as const) : ('solutions' as const);
         return { node: { type, span, keyword: tokenSpan(keyword), matrix }, extent: span };
       }
       case 'dimExpr': {

@@ -4,9 +4,9 @@
  */
 import { coordinatesIn, rref } from '../engine/matrix.js';
 import { equalsMV, fromVector, isZeroMV, toDense } from '../engine/multivector.js';
-import { normalizePoint, projectivelyEqual } from '../engine/normalize.js';
-import { binomialBig, unrankLex } from '../engine/subsets.js';
-import { coordinateName } from './conventions.js';
+import { projectivelyEqual } from '../engine/normalize.js';
+import { displayPoint, toLexOrder } from './coordinates.js';
+import { binomialBig } from '../engine/subsets.js';
 import type { ClaimStmt } from './ast.js';
 import { decompositionOf, describeRelation, relationLatex } from './decomposition.js';
 import { subspacePlucker, type Environment } from './environment.js';
@@ -190,13 +190,15 @@ function equalityClaim(
     if (point.values.every((x) => F.isZero(x))) {
       fail('math/zero-point', (other.t === 'point' ? s.relation.other! : s.subject).span, 'all coordinates are zero: that is no projective point');
     }
-    const shown = normalizePoint(F, p.dense, env.convention.normalization);
-    const equal = projectivelyEqual(F, p.dense, point.values);
-    if (equal) return verdict(true, `${thingText} is the projective point ${formatPoint(F, shown.values)} (${shown.mode})`, '', 'claim/plucker');
-    const mismatch = firstMismatch(env, p.dense, point.values, false, (i) => coordinateName(unrankLex(i, p.n, p.k), p.n));
+    // The literal lists coordinates in the file's index order; compare in the engine's lexicographic order.
+    const literal = toLexOrder(env, point.values, p.n, p.k);
+    const shown = displayPoint(env, p.dense, p.n, p.k);
+    const equal = projectivelyEqual(F, p.dense, literal);
+    if (equal) return verdict(true, `${thingText} is the projective point ${formatPoint(F, shown.normalized)} (${shown.applied})`, '', 'claim/plucker');
+    const mismatch = firstMismatch(env, shown.raw, point.values, false, (i) => `p${shown.labels[i]}`);
     return verdict(
       false,
-      `${thingText} is ${formatPoint(F, shown.values)} (${shown.mode}), which is not a multiple of ${formatPoint(F, point.values)}${mismatch}`,
+      `${thingText} is ${formatPoint(F, shown.normalized)} (${shown.applied}), which is not a multiple of ${formatPoint(F, point.values)}${mismatch}`,
       '',
       'claim/plucker',
     );

@@ -3,7 +3,6 @@
  * value, and the words for its witness.
  */
 import { decompose, type Decomposition, type FailedRelation } from '../engine/decompose.js';
-import { coordinateLatex, coordinateName } from './conventions.js';
 import type { Environment } from './environment.js';
 import type { MultivectorValue, Scalar } from './values.js';
 
@@ -13,10 +12,10 @@ export function decompositionOf(env: Environment, v: MultivectorValue): Decompos
 }
 
 /** `p12·p34 - p13·p24 + p14·p23` */
-export function relationFormula(relation: FailedRelation<Scalar>, n: number): string {
+export function relationFormula(env: Environment, relation: FailedRelation<Scalar>, n: number): string {
   return relation.terms
     .map((t, i) => {
-      const product = `${coordinateName(t.first, n)}·${coordinateName(t.second, n)}`;
+      const product = `${env.labels.name(t.first, n)}·${env.labels.name(t.second, n)}`;
       if (i === 0) return t.sign < 0 ? `-${product}` : product;
       return `${t.sign < 0 ? '-' : '+'} ${product}`;
     })
@@ -43,7 +42,7 @@ function paren(s: string): string {
 /** A full sentence: which relation fails and by how much. */
 export function describeRelation(env: Environment, relation: FailedRelation<Scalar>, n: number): string {
   return (
-    `the quadratic Plücker relation ${relationFormula(relation, n)} = 0 fails: ` +
+    `the quadratic Plücker relation ${relationFormula(env, relation, n)} = 0 fails: ` +
     `${relationValues(env, relation)} ≠ 0`
   );
 }
@@ -53,7 +52,7 @@ export function relationLatex(env: Environment, relation: FailedRelation<Scalar>
   const F = env.F;
   const formula = relation.terms
     .map((t, i) => {
-      const product = `${coordinateLatex(t.first, n)}\\,${coordinateLatex(t.second, n)}`;
+      const product = `${env.labels.latex(t.first, n)}\\,${env.labels.latex(t.second, n)}`;
       if (i === 0) return t.sign < 0 ? `-${product}` : product;
       return `${t.sign < 0 ? '-' : '+'} ${product}`;
     })

@@ -3,7 +3,7 @@
  * declared spaces, and the value (or failure) of every name declared so far.
  */
 import type { AnyField } from '../engine/fields.js';
-import type { Convention } from './conventions.js';
+import type { Convention, Labels } from './conventions.js';
 import type { Limits, Problem, Span } from './types.js';
 import type { Scalar, SpaceInfo, SubspaceValue, Value } from './values.js';
 import type { Multivector } from '../engine/multivector.js';
@@ -21,6 +21,8 @@ export interface Environment {
   /** The document text, for quoting the user's own expressions in messages. */
   source: string;
   convention: Convention;
+  /** Printed labels of index sets under the convention's first label. */
+  labels: Labels;
   limits: Limits;
   spaces: Map<string, SpaceInfo>;
   bindings: Map<string, Binding>;

@@ -30,13 +30,13 @@ import type {
   NameRef,
   SolutionsExpr,
   RowsExpr,
+  ColumnsExpr,
   Tuple,
 } from './ast.js';
 import { basisCandidates, subspacePlucker, type Environment } from './environment.js';
 import { fail, Poisoned } from './failure.js';
 import { decompositionOf, describeRelation } from './decomposition.js';
 import { formatCombination, formatScalar } from './text.js';
-import { coordinateName } from './conventions.js';
 import type { Span } from './types.js';
 import {
   describeValue,
@@ -80,6 +80,8 @@ export function evaluate(env: Environment, e: Expr, ctx: ExprContext): Value {
       return indexMap(env, e, ctx);
     case 'rows':
       return rowsSubspace(env, e, ctx);
+    case 'columns':
+      return columnsSubspace(env, e, ctx);
     case 'solutions':
       return solutionsSubspace(env, e, ctx);
   }
@@ -392,6 +394,16 @@ function rowsSubspace(env: Environment, e: RowsExpr, ctx: ExprContext): Subspace
   return subspaceOf(env, space, m.rows, m.rows);
 }
 
+/** `columns [ … ]`: an n×k matrix whose columns are the basis vectors (the layout of much engineering work). */
+function columnsSubspace(env: Environment, e: ColumnsExpr, ctx: ExprContext): SubspaceValue {
+  const m = matrix(env, e.matrix);
+  const space = contextSpace(env, ctx, e.matrix.span, m.rows.length, 'this matrix (read by columns)');
+  const vectors = Array.from({ length: m.ncols }, (_, j) => m.rows.map((r) => r[j]));
+  const names = vectors.map((_, j) => `column ${j + 1}`);
+  reportDependency(env, 'math/degenerate-rows', vectors, names, [], [], e.span, 'this basis matrix');
+  return subspaceOf(env, space, vectors, vectors);
+}
+
 function solutionsSubspace(env: Environment, e: SolutionsExpr, ctx: ExprContext): SubspaceValue {
   const m = matrix(env, e.matrix);
   const space = contextSpace(env, ctx, e.matrix.span, m.ncols, 'this system of equations');
@@ -414,7 +426,7 @@ function indexMap(env: Environment, e: IndexMapLit, ctx: ExprContext): Multivect
     const positions = labels.map((l) => l - env.convention.firstLabel);
     const bad = positions.findIndex((p) => p < 0 || p >= n);
     if (bad >= 0) {
-      fail('type/bad-label', x.key.span, `label ${labels[bad]} is outside 1…${n} (the labels of ${space.name}, dimension ${n})`);
+      fail('type/bad-label', x.key.span, `label ${labels[bad]} is outside ${labelRange(env, space)} (the labels of ${space.name}, dimension ${n})`);
     }
     if (new Set(positions).size !== positions.length) {
       fail('type/repeated-label', x.key.span, `index set ${labels.join('')} repeats a label; a wedge with a repeated vector is zero, so leave it out`);
@@ -432,12 +444,17 @@ function dimension(env: Environment, e: DimExpr, ctx: ExprContext): Value {
   fail('type/operand', e.operand.span, `dim applies to a subspace or a space, found ${describeValue(v)}`);
 }
 
+function labelRange(env: Environment, space: SpaceInfo): string {
+  return `${env.labels.position(0)}…${env.labels.position(space.dim - 1)}`;
+}
+
 /** Reads an index set argument: `13` (one digit a label) or `(1, 3)`. */
 function indexSetArgument(env: Environment, arg: Expr, space: SpaceInfo, k: number): number[] {
   let labels: number[];
+  const singleDigits = space.dim - 1 + env.convention.firstLabel <= 9;
   if (arg.type === 'number' && /^\d+$/.test(arg.text)) {
-    labels = space.dim <= 9 ? [...arg.text].map(Number) : [Number(arg.text)];
-    if (space.dim > 9 && k > 1) {
+    labels = singleDigits ? [...arg.text].map(Number) : [Number(arg.text)];
+    if (!singleDigits && k > 1) {
       fail('type/index-set', arg.span, `with labels above 9 write the index set as a list, e.g. (1, 10)`);
     }
   } else if (arg.type === 'tuple' && arg.items.every((x) => x.type === 'number' && /^\d+$/.test(x.text))) {
@@ -450,7 +467,7 @@ function indexSetArgument(env: Environment, arg: Expr, space: SpaceInfo, k: numb
   }
   const positions = labels.map((l) => l - env.convention.firstLabel);
   const bad = positions.findIndex((p) => p < 0 || p >= space.dim);
-  if (bad >= 0) fail('type/bad-label', arg.span, `label ${labels[bad]} is outside 1…${space.dim}`);
+  if (bad >= 0) fail('type/bad-label', arg.span, `label ${labels[bad]} is outside ${labelRange(env, space)}`);
   if (new Set(positions).size !== positions.length) fail('type/repeated-label', arg.span, 'the index set repeats a label');
   return positions;
 }
@@ -521,7 +538,7 @@ function call(env: Environment, e: Call, ctx: ExprContext): Value {
         fail(
           'math/chart-zero-minor',
           e.args[1]!.span,
-          `${coordinateName(sorted, w.space.dim)} = 0: this subspace is not in the chart where ${coordinateName(sorted, w.space.dim)} ≠ 0; choose columns whose Plücker coordinate is nonzero`,
+          `${env.labels.name(sorted, w.space.dim)} = 0: this subspace is not in the chart where ${env.labels.name(sorted, w.space.dim)} ≠ 0; choose columns whose Plücker coordinate is nonzero`,
         );
       }
       return { t: 'chart', subspace: w, columns, otherColumns: c.otherColumns, block: c.block, full: c.full };

@@ -9,6 +9,7 @@
 import { parseProgram } from './parse.js';
 import { evaluateProgram } from './program.js';
 import { resolveNames } from './scope.js';
+import { readConventions } from './conventions.js';
 import { DEFAULT_LIMITS, type Analysis, type AnalyzeOptions, type Hover, type Lens, type Problem } from './types.js';
 
 export * from './types.js';
@@ -16,19 +17,22 @@ export * from './types.js';
 export function analyze(text: string, options: AnalyzeOptions): Analysis {
   try {
     const { program, problems: syntax } = parseProgram(text);
-    const resolution = resolveNames(program);
+    const conventions = readConventions(program, {
+      normalization: options.normalization,
+      order: options.order,
+      firstLabel: options.firstLabel,
+      layout: options.layout,
+    });
+    const resolution = resolveNames(program, conventions.convention.firstLabel);
     const references = resolution.references.map((r) => ({
       span: r.span,
       name: r.target.name,
       kind: r.target.kind,
       ...(r.target.space !== undefined ? { space: r.target.space } : {}),
     }));
-    const problems: Problem[] = [...syntax, ...resolution.problems];
+    const problems: Problem[] = [...syntax, ...conventions.problems, ...resolution.problems];
     if (!options.evaluate) return { text, problems: sortProblems(problems), results: [], references, evaluated: false };
-    const outcome = evaluateProgram(program, text, {
-      normalization: options.normalization ?? 'primitive',
-      limits: { ...DEFAULT_LIMITS, ...options.limits },
-    });
+    const outcome = evaluateProgram(program, text, conventions.convention, { ...DEFAULT_LIMITS, ...options.limits });
     // Name resolution already reported unknown names; evaluation stays silent on them.
     problems.push(...outcome.problems);
     return { text, problems: sortProblems(problems), results: outcome.results, references, evaluated: true };

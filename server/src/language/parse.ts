@@ -45,6 +45,9 @@ const KIND_BY_KEYWORD: Record<string, DroppedStatement['kind']> = {
   multivector: 'multivector',
   claim: 'claim',
   show: 'show',
+  convention: 'convention',
+  map: 'map',
+  flag: 'flag',
 };
 
 function isRealToken(token: IToken | undefined): token is IToken {
@@ -132,6 +135,7 @@ class ProgramReader {
     const nameToken = piece[1];
     const declares: Ident | undefined =
       resolvedKind !== 'field' && resolvedKind !== 'normalize' && resolvedKind !== 'claim' && resolvedKind !== 'show' &&
+      resolvedKind !== 'convention' &&
       nameToken?.tokenType === T.Identifier
         ? { span: tokenSpan(nameToken), name: nameToken.image }
         : undefined;

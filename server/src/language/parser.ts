@@ -14,7 +14,7 @@
  */
 import { CstParser, type CstNode, type IToken } from 'chevrotain';
 import {
-  ALL_TOKENS, Basis, Claim, Colon, Comma, Decomposable, Dim, Dot, ElementOf, Equals, Field, Identifier,
+  ALL_TOKENS, Arrow, Basis, Claim, Columns, Convention, Flag, Is, MapKeyword, Colon, Comma, Decomposable, Dim, Dot, ElementOf, Equals, Field, Identifier,
   In, Intersect, LBrace, LBracket, LParen, Minus, Multivector, Normalize, Not, NotElementOf, NotEquals,
   NumberLiteral, Plus, RBrace, RBracket, RParen, Rows, Semicolon, Show, Slash, Solutions, Space, Star,
   Subspace, Vector, WedgeOp,
@@ -43,7 +43,61 @@ export class StatementParser extends CstParser {
       { ALT: () => this.SUBRULE(this.declStmt) },
       { ALT: () => this.SUBRULE(this.claimStmt) },
       { ALT: () => this.SUBRULE(this.showStmt) },
+      { ALT: () => this.SUBRULE(this.conventionStmt) },
+      { ALT: () => this.SUBRULE(this.mapStmt) },
+      { ALT: () => this.SUBRULE(this.flagStmt) },
     ]);
+  });
+
+  /** `convention order colex labels 0 layout columns`: key–value pairs, values may be hyphenated words. */
+  conventionStmt = this.RULE('conventionStmt', () => {
+    this.CONSUME(Convention, { LABEL: 'keyword' });
+    this.AT_LEAST_ONE(() => this.SUBRULE(this.conventionSetting, { LABEL: 'setting' }));
+  });
+
+  conventionSetting = this.RULE('conventionSetting', () => {
+    this.OR([
+      { ALT: () => this.CONSUME(Identifier, { LABEL: 'key' }) },
+      // `basis` and `in` are keywords elsewhere but read naturally as setting names.
+      { ALT: () => this.CONSUME(Basis, { LABEL: 'key' }) },
+    ]);
+    this.OR2([
+      { ALT: () => this.CONSUME2(Identifier, { LABEL: 'word' }) },
+      { ALT: () => this.CONSUME(NumberLiteral, { LABEL: 'word' }) },
+      { ALT: () => this.CONSUME(Rows, { LABEL: 'word' }) },
+      { ALT: () => this.CONSUME(Columns, { LABEL: 'word' }) },
+    ]);
+    this.MANY(() => {
+      this.CONSUME(Minus);
+      this.OR3([
+        { ALT: () => this.CONSUME3(Identifier, { LABEL: 'word' }) },
+        { ALT: () => this.CONSUME2(NumberLiteral, { LABEL: 'word' }) },
+      ]);
+    });
+  });
+
+  /** `map f : V -> U = [ … ]`: the matrix's rows (or columns, by the file's layout) are the images of V's basis. */
+  mapStmt = this.RULE('mapStmt', () => {
+    this.CONSUME(MapKeyword, { LABEL: 'keyword' });
+    this.CONSUME(Identifier, { LABEL: 'name' });
+    this.CONSUME(Colon);
+    this.CONSUME2(Identifier, { LABEL: 'from' });
+    this.CONSUME(Arrow);
+    this.CONSUME3(Identifier, { LABEL: 'to' });
+    this.CONSUME(Equals);
+    this.SUBRULE(this.expression, { LABEL: 'value' });
+  });
+
+  /** `flag F = (v1, v2, v3)` or `flag E = standard(V)`. */
+  flagStmt = this.RULE('flagStmt', () => {
+    this.CONSUME(Flag, { LABEL: 'keyword' });
+    this.CONSUME(Identifier, { LABEL: 'name' });
+    this.CONSUME(Equals);
+    this.SUBRULE(this.expression, { LABEL: 'value' });
+    this.OPTION(() => {
+      this.OR2([{ ALT: () => this.CONSUME(In) }, { ALT: () => this.CONSUME(ElementOf) }]);
+      this.CONSUME2(Identifier, { LABEL: 'inSpace' });
+    });
   });
 
   fieldStmt = this.RULE('fieldStmt', () => {
@@ -141,6 +195,19 @@ export class StatementParser extends CstParser {
         },
       },
       { ALT: () => this.CONSUME2(Decomposable, { LABEL: 'decomposable' }) },
+      {
+        ALT: () => {
+          this.CONSUME(Is, { LABEL: 'is' });
+          this.OPTION(() => this.CONSUME2(Not, { LABEL: 'not' }));
+          this.AT_LEAST_ONE(() => {
+            this.OR6([
+              { ALT: () => this.CONSUME(Identifier, { LABEL: 'property' }) },
+              { ALT: () => this.CONSUME3(Decomposable, { LABEL: 'property' }) },
+            ]);
+            this.OPTION2(() => this.CONSUME(Minus));
+          });
+        },
+      },
     ]);
   });
 
@@ -222,6 +289,7 @@ export class StatementParser extends CstParser {
       { ALT: () => this.SUBRULE(this.bracket) },
       { ALT: () => this.SUBRULE(this.indexMap) },
       { ALT: () => this.SUBRULE(this.rowsExpr) },
+      { ALT: () => this.SUBRULE(this.columnsExpr) },
       { ALT: () => this.SUBRULE(this.solutionsExpr) },
       { ALT: () => this.SUBRULE(this.dimExpr) },
     ]);
@@ -342,6 +410,11 @@ export class StatementParser extends CstParser {
 
   rowsExpr = this.RULE('rowsExpr', () => {
     this.CONSUME(Rows, { LABEL: 'keyword' });
+    this.SUBRULE(this.bracket, { LABEL: 'matrix' });
+  });
+
+  columnsExpr = this.RULE('columnsExpr', () => {
+    this.CONSUME(Columns, { LABEL: 'keyword' });
     this.SUBRULE(this.bracket, { LABEL: 'matrix' });
   });
 

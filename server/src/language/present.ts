@@ -1,24 +1,18 @@
 /**
  * How each kind of value is shown: a one-line summary (code lens), markdown
  * (hover), LaTeX (copy as LaTeX) and exact JSON (CLI). Every form that carries
- * coordinates also carries the convention it was computed in.
+ * coordinates also carries the convention it was computed in: index order,
+ * labels and layout come from the file's convention (see `coordinates.ts`).
  */
 import { toDense, sortedTerms } from '../engine/multivector.js';
-import { normalizePoint } from '../engine/normalize.js';
-import { forEachSubset, binomialBig } from '../engine/subsets.js';
+import { binomialBig } from '../engine/subsets.js';
 import { grassmannianDimension } from '../engine/grassmannian.js';
-import { conventionSentence, conventionTag, coordinateLatex, coordinateName, indexLabel } from './conventions.js';
+import { conventionJson, conventionSentence, conventionTag } from './conventions.js';
+import { displayPoint, type DisplayedPoint } from './coordinates.js';
 import { decompositionOf, describeRelation, relationFormula, relationLatex, relationValues } from './decomposition.js';
 import { subspacePlucker, type Environment } from './environment.js';
-import {
-  blockMatrixLatex,
-  matrixLatex,
-  multivectorLatex,
-  nameLatex,
-  pointLatex,
-} from './latex.js';
+import { blockMatrixLatex, matrixLatex, multivectorLatex, nameLatex, pointLatex } from './latex.js';
 import { formatCombination, formatMatrix, formatMatrixInline, formatMultivector, formatPoint, formatTuple } from './text.js';
-import type { Normalization } from './types.js';
 import type { ChartValue, MultivectorValue, Scalar, SpaceInfo, SubspaceValue, Value, VectorValue } from './values.js';
 
 export interface Presented {
@@ -33,40 +27,36 @@ export interface Presented {
 const LENS_COORDINATES = 10;
 /** How many labelled coordinates a hover lists before it abbreviates. */
 const HOVER_COORDINATES = 60;
+/** Up to how many coordinates the LaTeX form lists them all. */
+const LATEX_COORDINATES = 64;
 
 const s = (env: Environment, x: Scalar): string => env.F.format(x);
-
-function conventionJson(env: Environment, applied: Normalization): Record<string, unknown> {
-  return {
-    field: env.F.name,
-    order: env.convention.order,
-    firstLabel: env.convention.firstLabel,
-    layout: env.convention.layout,
-    normalization: applied,
-  };
-}
 
 function codeBlock(text: string): string {
   return '```text\n' + text + '\n```';
 }
 
-/** All C(n,k) labels in lexicographic order. */
-function labelsOf(n: number, k: number): string[] {
-  const out: string[] = [];
-  forEachSubset(n, k, (subset) => {
-    out.push(indexLabel(subset, n));
-  });
-  return out;
+function transpose(rows: readonly (readonly Scalar[])[]): Scalar[][] {
+  const ncols = rows[0]?.length ?? 0;
+  return Array.from({ length: ncols }, (_, j) => rows.map((r) => r[j]));
 }
 
-/** `p12 = 1   p13 = 3 …`, wrapped, at most `limit` entries. */
-function labelledList(env: Environment, values: readonly Scalar[], n: number, k: number, limit: number): string {
-  const entries: string[] = [];
-  let i = 0;
-  forEachSubset(n, k, (subset) => {
-    if (i < limit) entries.push(`${coordinateName(subset, n)} = ${s(env, values[i])}`);
-    i++;
-  });
+/** A list of vectors as a matrix in the file's layout: the vectors as rows, or as columns. */
+function laidOut(env: Environment, vectors: readonly (readonly Scalar[])[]): Scalar[][] {
+  return env.convention.layout === 'columns' ? transpose(vectors) : vectors.map((r) => r.slice());
+}
+
+function matrixText(env: Environment, vectors: readonly (readonly Scalar[])[]): string {
+  return formatMatrix(env.F, laidOut(env, vectors));
+}
+
+function matrixTex(env: Environment, vectors: readonly (readonly Scalar[])[]): string {
+  return matrixLatex(env.F, laidOut(env, vectors));
+}
+
+/** `p12 = 1   p13 = 3 …`, wrapped, at most `limit` entries, in display order. */
+function labelledList(env: Environment, point: DisplayedPoint, values: readonly Scalar[], limit: number): string {
+  const entries = values.slice(0, limit).map((v, i) => `p${point.labels[i]} = ${s(env, v)}`);
   const width = Math.max(...entries.map((e) => e.length));
   const perLine = Math.max(1, Math.floor(64 / (width + 3)));
   const lines: string[] = [];
@@ -79,7 +69,16 @@ function labelledList(env: Environment, values: readonly Scalar[], n: number, k:
 
 function shortPoint(env: Environment, values: readonly Scalar[]): string {
   if (values.length <= LENS_COORDINATES) return formatPoint(env.F, values);
-  return `[${values.slice(0, LENS_COORDINATES).map((x) => s(env, x)).join(' : ')} : … ] (${values.length} coordinates)`;
+  return `[${values.slice(0, LENS_COORDINATES).map((x) => s(env, x)).join(' : ')} : …] (${values.length} coordinates)`;
+}
+
+function hoverPoint(env: Environment, values: readonly Scalar[]): string {
+  return values.length <= HOVER_COORDINATES ? formatPoint(env.F, values) : shortPoint(env, values);
+}
+
+/** The labelled Plücker vector in LaTeX: (p_{12}, p_{13}, …) = [1 : 3 : …]. */
+function labelledPointLatex(env: Environment, point: DisplayedPoint): string {
+  return `\\bigl(${point.labels.map((l) => `p_{${l}}`).join(', ')}\\bigr) = ${pointLatex(env.F, point.normalized)}`;
 }
 
 /** What the points of G(k,n) are, projectively: points, lines, planes, (k−1)-planes of P^(n−1). */
@@ -93,21 +92,11 @@ function grassmannianWords(k: number, n: number): string {
   return `G(${k},${n}) of ${k}-dimensional subspaces of a ${n}-dimensional space (dimension k(n−k) = ${grassmannianDimension(k, n)}${projective})`;
 }
 
-export interface PluckerData {
-  raw: Scalar[];
-  normalized: Scalar[];
-  applied: Normalization;
-  /** Whose minors the raw values are. */
-  source: 'given' | 'reduced';
+function layoutWords(env: Environment): string {
+  return env.convention.layout === 'columns' ? 'columns' : 'rows';
 }
 
-/** The Plücker vector of a subspace, raw and normalized. */
-export function pluckerOfSubspace(env: Environment, w: SubspaceValue, dense: Scalar[]): PluckerData {
-  const point = normalizePoint(env.F, dense, env.convention.normalization);
-  return { raw: dense, normalized: point.values, applied: point.mode, source: w.given ? 'given' : 'reduced' };
-}
-
-export function presentSubspace(env: Environment, w: SubspaceValue, plucker: PluckerData | undefined): Presented {
+export function presentSubspace(env: Environment, w: SubspaceValue, lexPlucker: Scalar[] | undefined): Presented {
   const n = w.space.dim;
   const k = w.basis.length;
   const lines: string[] = [];
@@ -119,39 +108,40 @@ export function presentSubspace(env: Environment, w: SubspaceValue, plucker: Plu
     grassmannian: `G(${k},${n})`,
     grassmannianDim: grassmannianDimension(k, n),
     basis: w.basis.map((r) => r.map((x) => s(env, x))),
-    pivots: w.pivots.map((p) => p + env.convention.firstLabel),
+    pivots: w.pivots.map((p) => env.labels.position(p)),
   };
   let summary = `dim ${k} in ${w.space.name} · G(${k},${n})`;
-  let latex = `\\operatorname{rowspace}${matrixLatex(env.F, w.basis.length ? w.basis : [new Array(n).fill(env.F.zero)])}`;
-  if (plucker) {
-    const count = plucker.raw.length;
+  let latex = `\\operatorname{span}${matrixTex(env, w.basis.length ? w.basis : [new Array(n).fill(env.F.zero)])}`;
+  let applied = env.convention.normalization;
+  if (lexPlucker) {
+    const point = displayPoint(env, lexPlucker, n, k);
+    applied = point.applied;
+    const count = point.raw.length;
+    const source = w.given ? 'the basis as given' : 'the reduced basis';
     lines.push(
       '',
-      `**Plücker coordinates** (${count} = C(${n},${k}), minors of the ${plucker.source === 'given' ? 'basis as given' : 'reduced basis'}):`,
-      codeBlock(labelledList(env, plucker.raw, n, k, HOVER_COORDINATES)),
-      `**Projective point** (${plucker.applied}): ${count <= HOVER_COORDINATES ? formatPoint(env.F, plucker.normalized) : shortPoint(env, plucker.normalized)}`,
+      `**Plücker coordinates** (${count} = C(${n},${k}), minors of ${source}):`,
+      codeBlock(labelledList(env, point, point.raw, HOVER_COORDINATES)),
+      `**Projective point** (${point.applied}): ${hoverPoint(env, point.normalized)}`,
     );
-    summary += ` · ${shortPoint(env, plucker.normalized)} (${plucker.applied})`;
+    summary += ` · ${shortPoint(env, point.normalized)} (${point.applied})`;
     json.plucker = {
-      labels: labelsOf(n, k),
-      raw: plucker.raw.map((x) => s(env, x)),
-      normalized: plucker.normalized.map((x) => s(env, x)),
-      normalization: plucker.applied,
-      minorsOf: plucker.source,
+      labels: point.labels,
+      raw: point.raw.map((x) => s(env, x)),
+      normalized: point.normalized.map((x) => s(env, x)),
+      normalization: point.applied,
+      minorsOf: w.given ? 'given' : 'reduced',
     };
-    const labels: string[] = [];
-    forEachSubset(n, k, (subset) => {
-      labels.push(coordinateLatex(subset, n));
-    });
-    latex =
-      count <= 64
-        ? `\\bigl(${labels.join(', ')}\\bigr) = ${pointLatex(env.F, plucker.normalized)}`
-        : `${latex}, \\quad \\text{${count} Pl\\"ucker coordinates}`;
+    latex = count <= LATEX_COORDINATES ? labelledPointLatex(env, point) : `${latex}, \\quad \\text{${count} Pl\\"ucker coordinates}`;
   }
-  lines.push('', '**Reduced basis** (rows, reduced row echelon form):', codeBlock(k ? formatMatrix(env.F, w.basis) : '(the zero subspace)'));
-  lines.push('', conventionSentence(env.convention, plucker?.applied));
-  json.convention = conventionJson(env, plucker?.applied ?? env.convention.normalization);
-  return { summary: `${summary} · ${conventionTag(env.convention, plucker?.applied)}`, hover: lines.join('\n'), latex, json };
+  lines.push(
+    '',
+    `**Reduced basis** (as ${layoutWords(env)}, reduced row echelon form):`,
+    codeBlock(k ? matrixText(env, w.basis) : '(the zero subspace)'),
+  );
+  lines.push('', conventionSentence(env.convention, applied));
+  json.convention = conventionJson(env.convention, applied);
+  return { summary: `${summary} · ${conventionTag(env.convention, applied)}`, hover: lines.join('\n'), latex, json };
 }
 
 export function presentVector(env: Environment, v: VectorValue): Presented {
@@ -159,9 +149,15 @@ export function presentVector(env: Environment, v: VectorValue): Presented {
   const combination = formatCombination(env.F, v.coords, v.space.basisNames);
   return {
     summary: `${tuple} in ${v.space.name}`,
-    hover: [`${tuple} = ${combination}`, '', `A vector of ${v.space.name} = ${env.F.name}^${v.space.dim}, coordinates in the basis ${v.space.basisNames.join(', ')}.`, '', conventionSentence(env.convention)].join('\n'),
-    latex: matrixLatex(env.F, [v.coords]),
-    json: { space: v.space.name, coordinates: v.coords.map((x) => s(env, x)), convention: conventionJson(env, env.convention.normalization) },
+    hover: [
+      `${tuple} = ${combination}`,
+      '',
+      `A vector of ${v.space.name} = ${env.F.name}^${v.space.dim}, coordinates in the basis ${v.space.basisNames.join(', ')}.`,
+      '',
+      conventionSentence(env.convention),
+    ].join('\n'),
+    latex: matrixTex(env, [v.coords]),
+    json: { space: v.space.name, coordinates: v.coords.map((x) => s(env, x)), convention: conventionJson(env.convention) },
   };
 }
 
@@ -179,10 +175,11 @@ export function presentMultivector(env: Environment, v: MultivectorValue): Prese
   const json: Record<string, unknown> = {
     space: v.space.name,
     degree: k,
-    terms: terms.map((t) => ({ indices: indexLabel(t.subset, n), coefficient: s(env, t.coeff) })),
+    terms: terms.map((t) => ({ indices: env.labels.label(t.subset, n), coefficient: s(env, t.coeff) })),
   };
   let summary: string;
   let latex = multivectorLatex(F, v.mv, v.space.basisNames);
+  let applied = env.convention.normalization;
   if (terms.length === 0) {
     summary = `the zero element of ∧^${k} ${v.space.name}`;
     lines.push('', 'The zero multivector: no point of projective space and no subspace.');
@@ -190,25 +187,28 @@ export function presentMultivector(env: Environment, v: MultivectorValue): Prese
     json.zero = true;
   } else {
     const d = decompositionOf(env, v);
-    const dense = toDense(F, v.mv);
-    const point = normalizePoint(F, dense, env.convention.normalization);
-    json.normalized = point.values.map((x) => s(env, x));
-    json.normalization = point.mode;
+    const countFits = binomialBig(n, k) <= BigInt(env.limits.maxCoordinates);
+    const point = countFits ? displayPoint(env, toDense(F, v.mv), n, k) : undefined;
+    if (point) {
+      applied = point.applied;
+      json.labels = point.labels;
+      json.normalized = point.normalized.map((x) => s(env, x));
+      json.normalization = point.applied;
+    }
+    const shown = point ? ` · ${shortPoint(env, point.normalized)} (${point.applied})` : '';
     if (d.kind === 'decomposable') {
-      summary = `decomposable · comes from a ${k}-dimensional subspace · ${shortPoint(env, point.values)} (${point.mode})`;
+      summary = `decomposable · comes from a ${k}-dimensional subspace${shown}`;
       lines.push(
         '',
-        `**Decomposable**: it equals c · (b1 ∧ … ∧ b${k}) with c = ${s(env, d.scalar)} and the rows b1 … b${k} below, the reduced basis of the subspace it comes from (the vectors v with v ∧ ω = 0), a point of G(${k},${n}).`,
-        codeBlock(formatMatrix(F, d.basis)),
+        `**Decomposable**: it equals c · (b1 ∧ … ∧ b${k}) with c = ${s(env, d.scalar)} and b1 … b${k} the ${layoutWords(env)} below: the reduced basis of the subspace it comes from (the vectors v with v ∧ ω = 0), a point of G(${k},${n}).`,
+        codeBlock(matrixText(env, d.basis)),
       );
       json.decomposable = true;
       json.scalar = s(env, d.scalar);
       json.subspace = d.basis.map((r) => r.map((x) => s(env, x)));
-      latex = `${latex} = ${F.isOne(d.scalar) ? '' : `${F.latex(d.scalar)}\\,`}${d.basis
-        .map((r) => matrixLatex(F, [r]))
-        .join(' \\wedge ')}`;
+      latex = `${latex} = ${F.isOne(d.scalar) ? '' : `${F.latex(d.scalar)}\\,`}${d.basis.map((r) => matrixTex(env, [r])).join(' \\wedge ')}`;
     } else if (d.kind === 'not-decomposable') {
-      summary = `not decomposable · ${relationFormula(d.relation, n)} = ${s(env, d.relation.value)} ≠ 0 · divisors dim ${d.divisorDimension}`;
+      summary = `not decomposable · ${relationFormula(env, d.relation, n)} = ${s(env, d.relation.value)} ≠ 0 · divisors dim ${d.divisorDimension}`;
       lines.push(
         '',
         `**Not decomposable**: ${describeRelation(env, d.relation, n)}.`,
@@ -217,15 +217,15 @@ export function presentMultivector(env: Environment, v: MultivectorValue): Prese
       );
       json.decomposable = false;
       json.relation = {
-        left: indexLabel(d.relation.left, n),
-        right: indexLabel(d.relation.right, n),
-        formula: relationFormula(d.relation, n),
+        left: env.labels.label(d.relation.left, n),
+        right: env.labels.label(d.relation.right, n),
+        formula: relationFormula(env, d.relation, n),
         substituted: relationValues(env, d.relation),
         value: s(env, d.relation.value),
         terms: d.relation.terms.map((t) => ({
           sign: t.sign,
-          first: indexLabel(t.first, n),
-          second: indexLabel(t.second, n),
+          first: env.labels.label(t.first, n),
+          second: env.labels.label(t.second, n),
           firstValue: s(env, t.firstValue),
           secondValue: s(env, t.secondValue),
         })),
@@ -235,11 +235,11 @@ export function presentMultivector(env: Environment, v: MultivectorValue): Prese
     } else {
       summary = 'zero';
     }
-    lines.push('', `**Projective point** (${point.mode}): ${dense.length <= HOVER_COORDINATES ? formatPoint(F, point.values) : shortPoint(env, point.values)}`);
+    if (point) lines.push('', `**Projective point** (${point.applied}): ${hoverPoint(env, point.normalized)}`);
   }
-  lines.push('', conventionSentence(env.convention));
-  json.convention = conventionJson(env, env.convention.normalization);
-  return { summary: `${summary} · ${conventionTag(env.convention)}`, hover: lines.join('\n'), latex, json };
+  lines.push('', conventionSentence(env.convention, applied));
+  json.convention = conventionJson(env.convention, applied);
+  return { summary: `${summary} · ${conventionTag(env.convention, applied)}`, hover: lines.join('\n'), latex, json };
 }
 
 export function presentChart(env: Environment, c: ChartValue): Presented {
@@ -247,29 +247,33 @@ export function presentChart(env: Environment, c: ChartValue): Presented {
   const k = c.columns.length;
   const F = env.F;
   const sortedColumns = c.columns.slice().sort((a, b) => a - b);
-  const label = indexLabel(sortedColumns, n);
-  const others = c.otherColumns.map((i) => i + env.convention.firstLabel).join(', ');
+  const name = env.labels.name(sortedColumns, n);
+  const chartColumns = c.columns.map((i) => env.labels.position(i)).join(', ');
+  const others = c.otherColumns.map((i) => env.labels.position(i)).join(', ');
   const ordered = [...c.columns, ...c.otherColumns];
   const permuted = c.full.map((row) => ordered.map((j) => row[j]));
   return {
-    summary: `chart p${label} ≠ 0 · Y = ${formatMatrixInline(F, c.block)} (${k}×${n - k}, columns ${others})`,
+    summary: `chart ${name} ≠ 0 · Y = ${formatMatrixInline(F, laidOut(env, c.block))} (${k}×${n - k}, columns ${others})`,
     hover: [
-      `The affine chart of G(${k},${n}) where p${label} ≠ 0: the unique basis with the identity in columns ${c.columns.map((i) => i + 1).join(', ')}.`,
+      `The affine chart of G(${k},${n}) where ${name} ≠ 0: the unique basis with the identity in columns ${chartColumns}.`,
       '',
-      codeBlock(formatMatrix(F, c.full)),
+      codeBlock(matrixText(env, c.full)),
       '',
       `Chart coordinates Y (${k}×${n - k} = ${k * (n - k)} free entries, columns ${others}):`,
-      codeBlock(formatMatrix(F, c.block)),
+      codeBlock(matrixText(env, c.block)),
       '',
       conventionSentence(env.convention),
     ].join('\n'),
-    latex: `\\left[\\, I_{${k}} \\;\\middle|\\; Y \\,\\right] = ${blockMatrixLatex(F, permuted, k)}`,
+    latex:
+      env.convention.layout === 'columns'
+        ? `\\begin{pmatrix} I_{${k}} \\\\ Y \\end{pmatrix} = ${matrixLatex(F, transpose(permuted))}`
+        : `\\left[\\, I_{${k}} \\;\\middle|\\; Y \\,\\right] = ${blockMatrixLatex(F, permuted, k)}`,
     json: {
-      columns: c.columns.map((i) => i + env.convention.firstLabel),
-      otherColumns: c.otherColumns.map((i) => i + env.convention.firstLabel),
+      columns: c.columns.map((i) => env.labels.position(i)),
+      otherColumns: c.otherColumns.map((i) => env.labels.position(i)),
       block: c.block.map((r) => r.map((x) => s(env, x))),
       basis: c.full.map((r) => r.map((x) => s(env, x))),
-      convention: conventionJson(env, env.convention.normalization),
+      convention: conventionJson(env.convention),
     },
   };
 }
@@ -287,7 +291,7 @@ function abbreviate(names: readonly string[]): string {
   return names.length <= 6 ? names.join(' ') : `${names.slice(0, 3).join(' ')} … ${names[names.length - 1]}`;
 }
 
-/** Any value, for `show` lines. */
+/** Any value, for declarations and `show` lines. */
 export function presentValue(env: Environment, v: Value): Presented {
   switch (v.t) {
     case 'subspace':
@@ -295,7 +299,7 @@ export function presentValue(env: Environment, v: Value): Presented {
     case 'vector':
       return presentVector(env, v);
     case 'multivector':
-      return v.pluckerOf ? presentSubspaceWithPlucker(env, v.pluckerOf, toDense(env.F, v.mv)) : presentMultivector(env, v);
+      return v.pluckerOf ? presentSubspace(env, v.pluckerOf, toDense(env.F, v.mv)) : presentMultivector(env, v);
     case 'chart':
       return presentChart(env, v);
     case 'space':
@@ -307,16 +311,14 @@ export function presentValue(env: Environment, v: Value): Presented {
     case 'point':
       return { summary: formatPoint(env.F, v.values), hover: formatPoint(env.F, v.values), latex: pointLatex(env.F, v.values), json: { point: v.values.map((x) => s(env, x)) } };
     case 'matrix':
+      return { summary: formatMatrixInline(env.F, v.rows), hover: codeBlock(formatMatrix(env.F, v.rows)), latex: matrixLatex(env.F, v.rows), json: { rows: v.rows.map((r) => r.map((x) => s(env, x))) } };
     case 'indexset':
       return { summary: '', hover: '', latex: '', json: {} };
   }
 }
 
-/** A subspace with its Plücker vector, computed here unless the caller has it already. */
-export function presentSubspaceWithPlucker(env: Environment, w: SubspaceValue, dense?: Scalar[]): Presented {
-  if (!dense) {
-    if (binomialBig(w.space.dim, w.basis.length) > BigInt(env.limits.maxCoordinates)) return presentSubspace(env, w, undefined);
-    dense = toDense(env.F, subspacePlucker(env, w));
-  }
-  return presentSubspace(env, w, pluckerOfSubspace(env, w, dense));
+/** A subspace with its Plücker vector, unless C(n,k) is past the coordinate limit. */
+export function presentSubspaceWithPlucker(env: Environment, w: SubspaceValue): Presented {
+  if (binomialBig(w.space.dim, w.basis.length) > BigInt(env.limits.maxCoordinates)) return presentSubspace(env, w, undefined);
+  return presentSubspace(env, w, toDense(env.F, subspacePlucker(env, w)));
 }

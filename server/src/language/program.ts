@@ -9,16 +9,13 @@ import { NotPrimeError } from '../engine/prime-field.js';
 import { fromVector, isZeroMV } from '../engine/multivector.js';
 import type { ClaimStmt, DeclStmt, FieldStmt, NormalizeStmt, Program, ShowStmt, SpaceStmt } from './ast.js';
 import { checkClaim } from './claims.js';
-import type { Convention } from './conventions.js';
-import { conventionSentence } from './conventions.js';
+import { conventionSentence, defaultBasisNames, Labels, type Convention, type FileConvention } from './conventions.js';
 import type { Environment } from './environment.js';
 import { evaluate } from './expressions.js';
 import { Failure, Poisoned, fail } from './failure.js';
 import { presentSpace, presentValue, type Presented } from './present.js';
-import type { Limits, Normalization, Problem, Result, ResultKind, Span } from './types.js';
+import type { Limits, Problem, Result, ResultKind, Span } from './types.js';
 import { describeValue, type SpaceInfo, type Value } from './values.js';
-
-const NORMALIZATIONS: readonly Normalization[] = ['raw', 'first-one', 'primitive'];
 
 export interface ProgramOutcome {
   results: Result[];
@@ -88,27 +85,6 @@ function fieldOf(s: FieldStmt): AnyField {
   fail('type/unknown-field', s.name.span, `unknown field '${name}': write QQ (the rationals) or GF(p) for a prime p`);
 }
 
-function chooseNormalization(program: Program, fallback: Normalization, problems: Problem[]): Normalization {
-  const statements = program.statements.filter((s): s is NormalizeStmt => s.type === 'normalize');
-  let chosen: Normalization | undefined;
-  for (const s of statements) {
-    const mode = s.mode.name as Normalization;
-    if (!NORMALIZATIONS.includes(mode)) {
-      problems.push({
-        code: 'type/unknown-normalization',
-        severity: 'error',
-        message: `unknown normalization '${s.mode.name}': choose raw, first-one or primitive`,
-        span: s.mode.span,
-      });
-    } else if (chosen === undefined) {
-      chosen = mode;
-    } else if (chosen !== mode) {
-      problems.push({ code: 'type/duplicate-convention', severity: 'error', message: `the normalization is already ${chosen}; a file has one`, span: s.span });
-    }
-  }
-  return chosen ?? fallback;
-}
-
 class ProgramEvaluator {
   readonly results: Result[] = [];
 
@@ -133,7 +109,11 @@ class ProgramEvaluator {
     switch (s.type) {
       case 'field':
       case 'normalize':
+      case 'convention':
         return;
+      case 'map':
+      case 'flag':
+        fail('type/unsupported', s.keyword, `${s.type} declarations are read but not evaluated yet`);
       case 'space':
         return this.space(s);
       case 'decl':
@@ -158,7 +138,7 @@ class ProgramEvaluator {
     const space: SpaceInfo = {
       name: s.name.name,
       dim,
-      basisNames: s.basis ? s.basis.map((b) => b.name) : Array.from({ length: dim }, (_, i) => `e${i + 1}`),
+      basisNames: s.basis ? s.basis.map((b) => b.name) : defaultBasisNames(dim, this.env.convention.firstLabel),
       namedBasis: !!s.basis,
       declaration: s.span,
     };
@@ -274,20 +254,16 @@ function internalProblem(err: unknown, span: Span): Problem {
   };
 }
 
-export function evaluateProgram(
-  program: Program,
-  source: string,
-  defaults: { normalization: Normalization; limits: Limits },
-): ProgramOutcome {
+export function evaluateProgram(program: Program, source: string, fileConvention: FileConvention, limits: Limits): ProgramOutcome {
   const problems: Problem[] = [];
   const { field } = chooseField(program, problems);
-  const normalization = chooseNormalization(program, defaults.normalization, problems);
-  const convention: Convention = { field, normalization, order: 'lex', firstLabel: 1, layout: 'rows' };
+  const convention: Convention = { field, ...fileConvention };
   const env: Environment = {
     F: field,
     source,
     convention,
-    limits: defaults.limits,
+    labels: new Labels(convention.firstLabel),
+    limits,
     spaces: new Map(),
     bindings: new Map(),
     problems,

@@ -5,9 +5,10 @@
  */
 import type { Expr, NameRef, Program } from './ast.js';
 import { BUILTIN_NAMES, BUILTINS, FIELD_NAMES } from './builtins.js';
+import { defaultBasisNames } from './conventions.js';
 import type { Problem, Span } from './types.js';
 
-export type SymbolKind = 'space' | 'basis' | 'vector' | 'subspace' | 'multivector';
+export type SymbolKind = 'space' | 'basis' | 'vector' | 'subspace' | 'multivector' | 'map' | 'flag';
 
 export interface SymbolInfo {
   name: string;
@@ -153,7 +154,9 @@ class Resolver {
         this.walk(e.operand);
         return;
       case 'call':
-        if (!BUILTIN_NAMES.has(e.callee.name)) {
+        if (this.names.get(e.callee.name)?.kind === 'map') {
+          this.references.push({ span: e.callee.span, target: this.names.get(e.callee.name)! });
+        } else if (!BUILTIN_NAMES.has(e.callee.name)) {
           const known = BUILTINS.map((b) => b.name).join(', ');
           this.problems.push(
             NAME_PROBLEM('name/unknown-operation', e.callee.span, `'${e.callee.name}' is not a built-in operation (known: ${known})`),
@@ -173,6 +176,7 @@ class Resolver {
       case 'point':
       case 'indexmap':
       case 'rows':
+      case 'columns':
       case 'solutions':
         return;
     }
@@ -180,12 +184,13 @@ class Resolver {
 }
 
 /** Resolves every name of a program in statement order. */
-export function resolveNames(program: Program): Resolution {
+export function resolveNames(program: Program, firstLabel: 0 | 1 = 1): Resolution {
   const r = new Resolver(new Set((program.dropped ?? []).flatMap((d) => (d.declares ? [d.declares.name] : []))));
   for (const s of program.statements) {
     switch (s.type) {
       case 'field':
       case 'normalize':
+      case 'convention':
         break;
       case 'space': {
         r.declare({ name: s.name.name, kind: 'space', nameSpan: s.name.span, declSpan: s.span });
@@ -193,7 +198,7 @@ export function resolveNames(program: Program): Resolution {
         const names = s.basis
           ? s.basis.map((b) => ({ name: b.name, span: b.span }))
           : Number.isInteger(dim) && dim <= 64
-            ? Array.from({ length: dim }, (_, i) => ({ name: `e${i + 1}`, span: s.name.span }))
+            ? defaultBasisNames(dim, firstLabel).map((name) => ({ name, span: s.name.span }))
             : [];
         names.forEach((b, index) =>
           r.declare({ name: b.name, kind: 'basis', nameSpan: b.span, declSpan: s.span, space: s.name.name, index }),
@@ -211,6 +216,17 @@ export function resolveNames(program: Program): Resolution {
         break;
       case 'show':
         r.walk(s.value);
+        break;
+      case 'map':
+        r.referToSpace(s.from);
+        r.referToSpace(s.to);
+        r.walk(s.value);
+        r.declare({ name: s.name.name, kind: 'map', nameSpan: s.name.span, declSpan: s.span });
+        break;
+      case 'flag':
+        r.walk(s.value);
+        if (s.inSpace) r.referToSpace(s.inSpace);
+        r.declare({ name: s.name.name, kind: 'flag', nameSpan: s.name.span, declSpan: s.span });
         break;
     }
   }

@@ -130,7 +130,16 @@ function expectedPhrase(
       if (expected === T.RParen) return "',' or the closing ')' of the list of labels";
       if (expected === T.NumberLiteral) return 'a label (a whole number)';
       break;
+    case 'conventionStmt':
+    case 'conventionSetting':
+      return 'a convention setting (order lex|colex, labels 0|1, layout rows|columns)';
+    case 'mapStmt':
+      if (expected === T.Colon) return "':' and the spaces, as in map f : V -> U = [ … ]";
+      if (expected === T.Arrow) return "'->' between the source and target spaces";
+      if (expected === T.Identifier) return prevType === T.MapKeyword ? 'a name for the map' : 'the name of a space';
+      break;
     case 'rowsExpr':
+    case 'columnsExpr':
     case 'solutionsExpr':
       if (expected === T.LBracket) return "a matrix in brackets '[ … ]'";
       break;
@@ -237,7 +246,7 @@ function editDistance(a: string, b: string): number {
   return row[b.length]!;
 }
 
-const STATEMENT_WORDS = ['field', 'normalize', 'space', 'vector', 'subspace', 'multivector', 'claim', 'show'];
+const STATEMENT_WORDS = ['field', 'normalize', 'space', 'vector', 'subspace', 'multivector', 'claim', 'show', 'convention', 'map', 'flag'];
 
 /**
  * The statement keyword a word was probably meant to be (`Vector`, `vectr`,

@@ -77,6 +77,9 @@ export const Subspace = keyword('subspace', [StatementKeyword]);
 export const Multivector = keyword('multivector', [StatementKeyword]);
 export const Claim = keyword('claim', [StatementKeyword]);
 export const Show = keyword('show', [StatementKeyword]);
+export const Convention = keyword('convention', [StatementKeyword]);
+export const MapKeyword = createToken({ name: 'Map', pattern: 'map', longer_alt: Identifier, categories: [StatementKeyword] });
+export const Flag = keyword('flag', [StatementKeyword]);
 export const Dim = keyword('dim');
 export const Basis = keyword('basis');
 export const In = keyword('in');
@@ -84,11 +87,14 @@ export const Not = keyword('not');
 export const Decomposable = keyword('decomposable');
 export const Rows = keyword('rows');
 export const Solutions = keyword('solutions');
+export const Columns = keyword('columns');
+export const Is = keyword('is');
 
 /** An unsigned decimal: `3`, `0.125`. Signs are operators or part of a bracket entry. */
 export const NumberLiteral = createToken({ name: 'NumberLiteral', pattern: /[0-9]+(?:\.[0-9]+)?/ });
 
 export const NotEquals = createToken({ name: 'NotEquals', pattern: /!=|≠/ });
+export const Arrow = createToken({ name: 'Arrow', pattern: /->|→/ });
 export const Equals = createToken({ name: 'Equals', pattern: '=' });
 export const Plus = createToken({ name: 'Plus', pattern: '+' });
 export const Minus = createToken({ name: 'Minus', pattern: '-' });
@@ -110,12 +116,12 @@ export const Colon = createToken({ name: 'Colon', pattern: ':' });
 export const Dot = createToken({ name: 'Dot', pattern: '.' });
 
 export const KEYWORDS: readonly TokenType[] = [
-  Field, Normalize, Space, Vector, Subspace, Multivector, Claim, Show,
-  Dim, Basis, In, Not, Decomposable, Rows, Solutions,
+  Field, Normalize, Space, Vector, Subspace, Multivector, Claim, Show, Convention, MapKeyword, Flag,
+  Dim, Basis, In, Not, Decomposable, Rows, Solutions, Columns, Is,
 ];
 
 export const STATEMENT_KEYWORDS: readonly TokenType[] = [
-  Field, Normalize, Space, Vector, Subspace, Multivector, Claim, Show,
+  Field, Normalize, Space, Vector, Subspace, Multivector, Claim, Show, Convention, MapKeyword, Flag,
 ];
 
 /** Lexer order matters only where one pattern is a prefix of another: keywords before identifiers. */
@@ -124,7 +130,7 @@ export const ALL_TOKENS: TokenType[] = [
   StatementKeyword,
   ...KEYWORDS,
   Identifier, NumberLiteral,
-  NotEquals, Equals, Plus, Minus, Star, Slash, WedgeOp, Intersect, ElementOf, NotElementOf,
+  NotEquals, Arrow, Equals, Plus, Minus, Star, Slash, WedgeOp, Intersect, ElementOf, NotElementOf,
   LParen, RParen, LBracket, RBracket, LBrace, RBrace, Comma, Semicolon, Colon, Dot,
 ];
 

@@ -35,7 +35,7 @@ export interface RelatedSpan {
 }
 
 /** How a projective point (a Plücker vector) is scaled for display. */
-export type Normalization = 'raw' | 'first-one' | 'primitive';
+export type Normalization = 'raw' | 'first-one' | 'primitive' | 'positive';
 
 export interface AnalyzeOptions {
   /**
@@ -45,6 +45,10 @@ export interface AnalyzeOptions {
   evaluate: boolean;
   /** Default normalization; a `normalize` statement in the file overrides it. */
   normalization?: Normalization;
+  /** Defaults for the other conventions (workspace settings); `convention` statements in the file override them. */
+  order?: 'lex' | 'colex';
+  firstLabel?: 0 | 1;
+  layout?: 'rows' | 'columns';
   /** Bounds that turn a runaway computation into a `limit/…` problem. */
   limits?: Partial<Limits>;
 }
@@ -109,7 +113,7 @@ export interface Analysis {
 export interface NameUse {
   span: Span;
   name: string;
-  kind: 'space' | 'basis' | 'vector' | 'subspace' | 'multivector';
+  kind: 'space' | 'basis' | 'vector' | 'subspace' | 'multivector' | 'map' | 'flag';
   /** For a basis vector: the space it belongs to. */
   space?: string;
 }

@@ -1,0 +1,120 @@
+/**
+ * The extension as a user meets it: installed from its .vsix into a real VS Code workbench
+ * (code-server, driven in chromium), a sample opened from the explorer, then what the user sees —
+ * the false claim's squiggle and Problems entry, a hover with Plücker coordinates, a code lens and
+ * its copy-as-LaTeX, an edit that makes the claim true, and recovery after a syntax error.
+ *
+ * Run by scripts/e2e/run.ts (npm run test:e2e), which packages the .vsix first.
+ */
+import { after, before, describe, test } from 'node:test';
+import assert from 'node:assert/strict';
+import { copyFileSync, mkdirSync, mkdtempSync, readFileSync, readdirSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import type { BrowserContext, Page } from 'playwright-core';
+import { ARTIFACTS, ROOT, VSIX } from '../../scripts/e2e/paths.js';
+import { prepareProfile, startCodeServer, type CodeServer } from '../../scripts/e2e/code-server.js';
+import { openBrowser } from '../../scripts/e2e/browser.js';
+import { SELECTORS, Workbench } from './workbench-page.js';
+import * as facts from './sample-facts.js';
+import { timed } from './timed.js';
+
+/** Copies the samples and the broken fixture into a fresh folder: the repository's files are never edited. */
+export function makeWorkspace(scratch: string): string {
+  const workspace = join(scratch, 'workspace');
+  mkdirSync(workspace, { recursive: true });
+  for (const name of readdirSync(join(ROOT, 'samples'))) {
+    if (name.endsWith('.wedge')) copyFileSync(join(ROOT, 'samples', name), join(workspace, name));
+  }
+  copyFileSync(join(ROOT, 'test/e2e/fixtures', facts.BROKEN_FILE), join(workspace, facts.BROKEN_FILE));
+  return workspace;
+}
+
+describe('the extension in the VS Code workbench', { timeout: 240_000 }, () => {
+  const scratch = mkdtempSync(join(tmpdir(), 'wedgework-e2e-workbench-'));
+  const artifacts = join(ARTIFACTS, 'workbench');
+  let server: CodeServer | undefined;
+  let browser: BrowserContext | undefined;
+  let page: Page;
+  let bench: Workbench;
+  let workspace: string;
+  const sampleText = readFileSync(join(ROOT, 'samples', facts.SAMPLE_FILE), 'utf8');
+  /** One-based, as the status bar and Go to Line count. */
+  const claimLine = facts.lineOf(sampleText, facts.FALSE_CLAIM_TEXT) + 1;
+
+  before(async () => {
+    rmSync(artifacts, { recursive: true, force: true });
+    workspace = makeWorkspace(scratch);
+    const profile = await timed('install the .vsix', () => prepareProfile(scratch, { vsix: VSIX }));
+    server = await timed('start code-server', () => startCodeServer(profile));
+    browser = await timed('start chromium', () => openBrowser(scratch, server!.origin));
+    page = browser.pages()[0] ?? (await browser.newPage());
+    bench = new Workbench(page, artifacts);
+    await timed('load the workbench', () => bench.open(server!.url(workspace)));
+    await timed('open the sample', () => bench.openFile(facts.SAMPLE_FILE, 'Sight lines of a two-camera calibration rig'));
+  });
+
+  after(async () => {
+    await browser?.close().catch(() => {});
+    await server?.stop();
+    if (server) copyFileSync(server.logPath, join(artifacts, 'code-server.log'));
+    rmSync(scratch, { recursive: true, force: true });
+  });
+
+  test('the code lens above the subspace shows its result and copies it as LaTeX', async () => {
+    await bench.waitForText('the code lens of sightA', SELECTORS.codeLens, facts.SIGHT_A_LENS);
+    await page.evaluate('navigator.clipboard.writeText("(nothing copied yet)")');
+    await bench.clickLens(facts.SIGHT_A_LENS);
+    await bench.waitForText('the status bar confirms the copy', SELECTORS.statusBar, ['copied', 'as LaTeX']);
+    const copied = await bench.readClipboard();
+    const missing = facts.missingFrom(copied, facts.SIGHT_A_LATEX);
+    assert.deepEqual(missing, [], `the clipboard holds:\n${copied}`);
+    await bench.screenshot('code-lens-copied');
+  });
+
+  test('the hover over a subspace name shows its Plücker coordinates and the convention', async () => {
+    const hover = await bench.hoverWord(facts.HOVERED_LINE_TEXT, facts.HOVERED_NAME, facts.hoverExpectations());
+    assert.ok(hover.includes(`subspace ${facts.HOVERED_NAME}`), `the hover names the subspace; it showed:\n${hover}`);
+    await bench.waitForHoverOpaque();
+    await bench.screenshot('hover-plucker');
+    await page.keyboard.press('Escape');
+  });
+
+  test('the false claim is squiggled and listed in Problems with its code and message', async () => {
+    await bench.goToLine(claimLine);
+    await bench.waitForVisible('the squiggle under the false claim', SELECTORS.errorSquiggle);
+    await bench.showProblems();
+    const row = await bench.waitForText('the Problems entry of the false claim', SELECTORS.problemRow, [
+      facts.FALSE_CLAIM_CODE,
+      ...facts.FALSE_CLAIM_MESSAGE,
+    ]);
+    assert.ok(row.includes(`[Ln ${claimLine}`), `the Problems entry points at line ${claimLine}; it showed:\n${row}`);
+    await bench.screenshot('false-claim-problem');
+  });
+
+  test('editing the claim to a true one and saving removes the error', async () => {
+    await bench.goToLine(claimLine);
+    await page.keyboard.press('Shift+End');
+    await page.keyboard.type(facts.TRUE_CLAIM_TEXT);
+    await page.keyboard.press('Control+S');
+    await bench.waitForText('the lens of the edited claim after saving', SELECTORS.codeLens, facts.TRUE_CLAIM_LENS);
+    await bench.waitForGone('the squiggle of the false claim', SELECTORS.errorSquiggle);
+    await bench.waitForGone('the Problems entry of the false claim', SELECTORS.problemRow, [facts.FALSE_CLAIM_CODE]);
+    await bench.screenshot('claim-fixed');
+    const saved = readFileSync(join(workspace, facts.SAMPLE_FILE), 'utf8');
+    assert.ok(saved.includes(facts.TRUE_CLAIM_TEXT), 'the edit was saved to the workspace copy');
+  });
+
+  test('a syntax error is reported and the statements after it still get lenses', async () => {
+    await bench.openFile(facts.BROKEN_FILE, 'A statement with a syntax error');
+    await bench.showProblems();
+    await bench.waitForText('the Problems entry of the syntax error', SELECTORS.problemRow, [
+      facts.SYNTAX_CODE_PREFIX,
+      ...facts.SYNTAX_MESSAGE,
+    ]);
+    await bench.waitForVisible('the squiggle of the syntax error', SELECTORS.errorSquiggle);
+    await bench.waitForText('the lens of the statement after the error', SELECTORS.codeLens, facts.RECOVERED_LENS);
+    await bench.waitForText('the lens of the claim after the error', SELECTORS.codeLens, [facts.RECOVERED_CLAIM_LENS]);
+    await bench.screenshot('syntax-recovery');
+  });
+});
