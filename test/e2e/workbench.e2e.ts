@@ -8,7 +8,7 @@
  */
 import { after, before, describe, test } from 'node:test';
 import assert from 'node:assert/strict';
-import { copyFileSync, mkdirSync, mkdtempSync, readFileSync, readdirSync, rmSync } from 'node:fs';
+import { copyFileSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { BrowserContext, Page } from 'playwright-core';
@@ -16,19 +16,9 @@ import { ARTIFACTS, ROOT, VSIX } from '../../scripts/e2e/paths.js';
 import { prepareProfile, startCodeServer, type CodeServer } from '../../scripts/e2e/code-server.js';
 import { openBrowser } from '../../scripts/e2e/browser.js';
 import { SELECTORS, Workbench } from './workbench-page.js';
+import { makeWorkspace } from './workspace.js';
 import * as facts from './sample-facts.js';
 import { timed } from './timed.js';
-
-/** Copies the samples and the broken fixture into a fresh folder: the repository's files are never edited. */
-export function makeWorkspace(scratch: string): string {
-  const workspace = join(scratch, 'workspace');
-  mkdirSync(workspace, { recursive: true });
-  for (const name of readdirSync(join(ROOT, 'samples'))) {
-    if (name.endsWith('.wedge')) copyFileSync(join(ROOT, 'samples', name), join(workspace, name));
-  }
-  copyFileSync(join(ROOT, 'test/e2e/fixtures', facts.BROKEN_FILE), join(workspace, facts.BROKEN_FILE));
-  return workspace;
-}
 
 describe('the extension in the VS Code workbench', { timeout: 240_000 }, () => {
   const scratch = mkdtempSync(join(tmpdir(), 'wedgework-e2e-workbench-'));
@@ -96,6 +86,8 @@ describe('the extension in the VS Code workbench', { timeout: 240_000 }, () => {
     await bench.goToLine(claimLine);
     await page.keyboard.press('Shift+End');
     await page.keyboard.type(facts.TRUE_CLAIM_TEXT);
+    // Close the word suggestions the typing opened, as a user would before saving.
+    await page.keyboard.press('Escape');
     await page.keyboard.press('Control+S');
     await bench.waitForText('the lens of the edited claim after saving', SELECTORS.codeLens, facts.TRUE_CLAIM_LENS);
     await bench.waitForGone('the squiggle of the false claim', SELECTORS.errorSquiggle);

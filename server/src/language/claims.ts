@@ -11,6 +11,7 @@ import type { ClaimStmt } from './ast.js';
 import { decompositionOf, describeRelation, relationLatex } from './decomposition.js';
 import { subspacePlucker, type Environment } from './environment.js';
 import { checkCoordinateLimit, evaluate } from './expressions.js';
+import { propertyHolds } from './combinatorics.js';
 import { fail } from './failure.js';
 import { matrixLatex } from './latex.js';
 import { formatCombination, formatMatrixInline, formatMultivector, formatPoint, formatTuple } from './text.js';
@@ -36,7 +37,9 @@ export function checkClaim(env: Environment, source: string, s: ClaimStmt): Clai
   if (op === 'decomposable' || op === 'not decomposable') {
     return decomposableClaim(env, subject, subjectText, claimed, op === 'decomposable', s);
   }
+  if (op === 'is' || op === 'is not') return propertyClaim(env, subject, subjectText, claimed, op === 'is', s);
   const otherExpr = s.relation.other!;
+  if (subject.t === 'schubert') return partitionClaim(subject.partition, subjectText, otherExpr, claimed, op === '=', s);
   // A count is compared with a whole number as written, not with its image in
   // the field: over GF(2), `dim A = 3` must not read 3 as 1.
   const other: Value =
@@ -237,11 +240,61 @@ function equalityClaim(
 
   const a = asMultivectorValue(env, subject);
   const b = asMultivectorValue(env, other);
+  if (a && b && a.space.name === b.space.name && a.mv.k === b.mv.k && (a.pluckerOf || b.pluckerOf)) {
+    // A Plücker vector is a projective point: compare up to a nonzero scalar.
+    const equal = projectivelyEqual(F, toDense(F, a.mv), toDense(F, b.mv));
+    const found = equal
+      ? `${subjectText} and ${otherText} are the same projective point`
+      : `${subjectText} and ${otherText} are different projective points${firstMismatch(env, toDense(F, a.mv), toDense(F, b.mv))}`;
+    return verdict(equal, found, '', 'claim/plucker');
+  }
   if (a && b && a.space.name === b.space.name && a.mv.k === b.mv.k) {
     const equal = equalsMV(F, a.mv, b.mv);
     return verdict(equal, equal ? `${subjectText} and ${otherText} have the same coordinates` : `${subjectText} and ${otherText} differ${firstMismatch(env, toDense(F, a.mv), toDense(F, b.mv), true)}`);
   }
   fail('type/operand', s.relation.span, `cannot compare ${describeValue(subject)} with ${describeValue(other)}`);
+}
+
+/** `claim W is totally nonnegative`, `claim eta is not decomposable`, `claim W is uniform`. */
+function propertyClaim(env: Environment, subject: Value, subjectText: string, claimed: string, wanted: boolean, s: ClaimStmt): ClaimOutcome {
+  const property = s.relation.property!.name;
+  if (property === 'decomposable') return decomposableClaim(env, subject, subjectText, claimed, wanted, s);
+  const { holds, found } = propertyHolds(env, subject, property, s.relation.property!.span);
+  const words = property.replace(/-/g, ' ');
+  return {
+    holds: holds === wanted,
+    code: wanted ? `claim/${property}` : `claim/not-${property}`,
+    claimed,
+    found: `${subjectText} is ${holds ? '' : 'not '}${words}: ${found}`,
+    latex: '',
+  };
+}
+
+/** `claim schubert(W) = (2, 1)`: the partition as written, compared with the cell's. */
+function partitionClaim(
+  partition: number[],
+  subjectText: string,
+  other: ClaimStmt['subject'],
+  claimed: string,
+  wanted: boolean,
+  s: ClaimStmt,
+): ClaimOutcome {
+  const items = other.type === 'tuple' ? other.items : [other];
+  const written = items.map((item) => {
+    if (item.type !== 'number' || !/^\d+$/.test(item.text)) fail('type/operand', item.span, 'a partition is a list of whole numbers, e.g. (2, 1)');
+    return Number(item.text);
+  });
+  // Zero parts are not part of a partition: (2, 1, 0) is (2, 1).
+  const a = partition.filter((x) => x !== 0);
+  const b = written.filter((x) => x !== 0);
+  const equal = a.length === b.length && a.every((x, i) => x === b[i]);
+  return {
+    holds: equal === wanted,
+    code: wanted ? 'claim/schubert' : 'claim/inequality',
+    claimed,
+    found: `${subjectText} has the partition (${partition.join(', ')})${equal ? '' : `, not (${written.join(', ')})`}`,
+    latex: `\lambda = (${partition.join(', ')})`,
+  };
 }
 
 /** The first coordinate where two vectors fail to be proportional (or, exactly, to agree). */

@@ -24,6 +24,15 @@ export interface Convention {
   firstLabel: 0 | 1;
   /** Whether a basis matrix is displayed with the basis vectors as its rows or as its columns. */
   layout: Layout;
+  /** Lines of projective 3-space as 6-vectors: (direction, moment) or (moment, direction). */
+  lines: 'direction-moment' | 'moment-direction';
+  /** The moment of a line: point × direction (`pxd`) or direction × point (`dxp`). */
+  moment: 'pxd' | 'dxp';
+  /**
+   * Which homogeneous coordinate of projective 3-space is 1 at finite points (the first or the last);
+   * undefined until a file says so — and only then is there a plane at infinity to tell parallel lines apart.
+   */
+  homogeneous?: 'first' | 'last';
 }
 
 /** The parts of a convention a file can choose, without the field. */
@@ -34,6 +43,8 @@ export const DEFAULT_CONVENTION: FileConvention = {
   order: 'lex',
   firstLabel: 1,
   layout: 'rows',
+  lines: 'direction-moment',
+  moment: 'pxd',
 };
 
 export const NORMALIZATIONS: readonly Normalization[] = ['raw', 'first-one', 'primitive', 'positive'];
@@ -176,8 +187,24 @@ export function readConventions(program: Program, defaults: Partial<FileConventi
             if (NORMALIZATIONS.includes(value as Normalization)) set('normalization', value as Normalization, s, setting.span);
             else problem('type/unknown-normalization', setting.value.span, `unknown normalization '${value}': choose raw, first-one, primitive or positive`);
             break;
+          case 'lines':
+            if (value === 'direction-moment' || value === 'moment-direction') set('lines', value, s, setting.span);
+            else problem('type/unknown-convention', setting.value.span, `lines are direction-moment or moment-direction, found '${value}'`);
+            break;
+          case 'moment':
+            if (value === 'pxd' || value === 'dxp') set('moment', value, s, setting.span);
+            else problem('type/unknown-convention', setting.value.span, `the moment is pxd (point × direction) or dxp (direction × point), found '${value}'`);
+            break;
+          case 'homogeneous':
+            if (value === 'first' || value === 'last') set('homogeneous', value, s, setting.span);
+            else problem('type/unknown-convention', setting.value.span, `the homogeneous coordinate is the first or the last, found '${value}'`);
+            break;
           default:
-            problem('type/unknown-convention', setting.key.span, `unknown convention '${setting.key.name}': the settings are order, labels, layout and normalize`);
+            problem(
+              'type/unknown-convention',
+              setting.key.span,
+              `unknown convention '${setting.key.name}': the settings are order, labels, layout, normalize, lines, moment and homogeneous`,
+            );
         }
       }
     }

@@ -36,6 +36,8 @@ import type {
 import { basisCandidates, subspacePlucker, type Environment } from './environment.js';
 import { fail, Poisoned } from './failure.js';
 import { decompositionOf, describeRelation } from './decomposition.js';
+import { applyMap, callGeometry } from './geometry.js';
+import { callCombinatorics } from './combinatorics.js';
 import { formatCombination, formatScalar } from './text.js';
 import type { Span } from './types.js';
 import {
@@ -543,9 +545,20 @@ function call(env: Environment, e: Call, ctx: ExprContext): Value {
       }
       return { t: 'chart', subspace: w, columns, otherColumns: c.otherColumns, block: c.block, full: c.full };
     }
-    default:
+    default: {
+      const evaluateArg = (arg: Expr) => evaluate(env, arg, ctx);
+      const builtinValue = callGeometry(env, e, evaluateArg) ?? callCombinatorics(env, e, evaluateArg);
+      if (builtinValue) return builtinValue;
+      const bound = env.bindings.get(e.callee.name);
+      if (bound) {
+        if (!bound.value) throw new Poisoned();
+        if (bound.value.t !== 'map') fail('type/not-callable', e.callee.span, `${e.callee.name} is ${describeValue(bound.value)}, not a map: only maps and built-in operations are applied with (…)`);
+        if (e.args.length !== 1) fail('type/arguments', e.span, `a map takes one argument, found ${e.args.length}`);
+        return applyMap(env, bound.value, evaluate(env, e.args[0]!, ctx), e.args[0]!.span);
+      }
       // Unknown operations were reported by name resolution.
       throw new Poisoned();
+    }
   }
 }
 

@@ -13,6 +13,8 @@ import { decompositionOf, describeRelation, relationFormula, relationLatex, rela
 import { subspacePlucker, type Environment } from './environment.js';
 import { blockMatrixLatex, matrixLatex, multivectorLatex, nameLatex, pointLatex } from './latex.js';
 import { formatCombination, formatMatrix, formatMatrixInline, formatMultivector, formatPoint, formatTuple } from './text.js';
+import { presentDirectionMoment, presentMatroid, presentMeet, presentPositivity } from './present-combinatorics.js';
+import { presentCompound, presentFlag, presentMap, presentQuotient, presentSchubert } from './present-geometry.js';
 import type { ChartValue, MultivectorValue, Scalar, SpaceInfo, SubspaceValue, Value, VectorValue } from './values.js';
 
 export interface Presented {
@@ -101,6 +103,7 @@ export function presentSubspace(env: Environment, w: SubspaceValue, lexPlucker: 
   const k = w.basis.length;
   const lines: string[] = [];
   lines.push(`A point of the Grassmannian ${grassmannianWords(k, n)}; ambient space ${w.space.name} = ${env.F.name}^${n}.`);
+  if (w.note) lines.push('', w.note);
   const json: Record<string, unknown> = {
     space: w.space.name,
     dim: k,
@@ -172,6 +175,7 @@ export function presentMultivector(env: Environment, v: MultivectorValue): Prese
     '',
     codeBlock(formatMultivector(F, v.mv, v.space.basisNames)),
   );
+  if (v.note) lines.push('', v.note);
   const json: Record<string, unknown> = {
     space: v.space.name,
     degree: k,
@@ -314,6 +318,24 @@ export function presentValue(env: Environment, v: Value): Presented {
       return { summary: formatMatrixInline(env.F, v.rows), hover: codeBlock(formatMatrix(env.F, v.rows)), latex: matrixLatex(env.F, v.rows), json: { rows: v.rows.map((r) => r.map((x) => s(env, x))) } };
     case 'indexset':
       return { summary: '', hover: '', latex: '', json: {} };
+    case 'map':
+      return presentMap(env, v);
+    case 'flag':
+      return presentFlag(env, v);
+    case 'schubert':
+      return presentSchubert(env, v);
+    case 'quotient':
+      return presentQuotient(env, v);
+    case 'compound':
+      return presentCompound(env, v);
+    case 'matroid':
+      return presentMatroid(env, v);
+    case 'positivity':
+      return presentPositivity(env, v);
+    case 'meet':
+      return presentMeet(env, v);
+    case 'direction-moment':
+      return presentDirectionMoment(env, v);
   }
 }
 

@@ -7,7 +7,8 @@ import { fieldByName, type AnyField } from '../engine/fields.js';
 import { QQ } from '../engine/rational.js';
 import { NotPrimeError } from '../engine/prime-field.js';
 import { fromVector, isZeroMV } from '../engine/multivector.js';
-import type { ClaimStmt, DeclStmt, FieldStmt, NormalizeStmt, Program, ShowStmt, SpaceStmt } from './ast.js';
+import type { ClaimStmt, DeclStmt, FieldStmt, FlagStmt, Ident, MapStmt, Program, ShowStmt, SpaceStmt } from './ast.js';
+import { flagFromVectors } from './geometry.js';
 import { checkClaim } from './claims.js';
 import { conventionSentence, defaultBasisNames, Labels, type Convention, type FileConvention } from './conventions.js';
 import type { Environment } from './environment.js';
@@ -112,8 +113,9 @@ class ProgramEvaluator {
       case 'convention':
         return;
       case 'map':
+        return this.map(s);
       case 'flag':
-        fail('type/unsupported', s.keyword, `${s.type} declarations are read but not evaluated yet`);
+        return this.flag(s);
       case 'space':
         return this.space(s);
       case 'decl':
@@ -176,6 +178,57 @@ class ProgramEvaluator {
     const p = presentValue(this.env, shown);
     const title = `**${s.declKind} ${s.name.name}**`;
     this.results.push(result(s.declKind, s.span, s.name.span, title, p, s.name.name));
+  }
+
+  private bind(name: Ident, span: Span, value: Value, kind: ResultKind, keyword: string): void {
+    this.env.bindings.set(name.name, { value, declSpan: span, nameSpan: name.span });
+    this.results.push(result(kind, span, name.span, `**${keyword} ${name.name}**`, presentValue(this.env, value), name.name));
+  }
+
+  private map(s: MapStmt): void {
+    if (this.env.bindings.has(s.name.name)) return; // a duplicate, reported by name resolution
+    const from = this.env.spaces.get(s.from.name);
+    const to = this.env.spaces.get(s.to.name);
+    if (!from || !to) throw new Poisoned();
+    const value = evaluate(this.env, s.value, {});
+    if (value.t !== 'matrix') {
+      fail('type/declared-kind', s.value.span, `a map is given by a matrix in brackets [ … ], found ${describeValue(value)}`);
+    }
+    const columns = this.env.convention.layout === 'columns';
+    const [wantRows, wantCols] = columns ? [to.dim, from.dim] : [from.dim, to.dim];
+    if (value.rows.length !== wantRows || value.ncols !== wantCols) {
+      fail(
+        'type/wrong-shape',
+        s.value.span,
+        `a map ${from.name} → ${to.name} is a ${wantRows}×${wantCols} matrix (${columns ? 'its columns are' : 'its rows are'} the images of the ${from.dim} basis vectors of ${from.name}), found ${value.rows.length}×${value.ncols}`,
+      );
+    }
+    const matrix = columns ? Array.from({ length: from.dim }, (_, i) => value.rows.map((r) => r[i])) : value.rows;
+    this.bind(s.name, s.span, { t: 'map', name: s.name.name, from, to, matrix }, 'map', 'map');
+  }
+
+  private flag(s: FlagStmt): void {
+    if (this.env.bindings.has(s.name.name)) return;
+    let space: SpaceInfo | undefined;
+    if (s.inSpace) {
+      space = this.env.spaces.get(s.inSpace.name);
+      if (!space) throw new Poisoned();
+    }
+    let value: Value;
+    if (s.value.type === 'tuple') {
+      const items = s.value.items;
+      const vectors = items.map((item) => {
+        const v = evaluate(this.env, item, space ? { space } : {});
+        if (v.t !== 'vector') fail('type/operand', item.span, `a flag is given by vectors, found ${describeValue(v)}`);
+        return v;
+      });
+      value = flagFromVectors(this.env, vectors, items.map((i) => i.span), s.value.span);
+    } else {
+      value = evaluate(this.env, s.value, space ? { space } : {});
+      if (value.t !== 'flag') fail('type/declared-kind', s.value.span, `a flag is standard(V), opposite(V) or a tuple of vectors (f1, …, fn), found ${describeValue(value)}`);
+    }
+    if (space && value.space.name !== space.name) fail('type/space-mismatch', s.inSpace!.span, `this flag is in ${value.space.name}, not ${space.name}`);
+    this.bind(s.name, s.span, value, 'flag', 'flag');
   }
 
   private claim(s: ClaimStmt): void {

@@ -73,6 +73,8 @@ export type ResultKind =
   | 'subspace'
   | 'multivector'
   | 'scalar'
+  | 'map'
+  | 'flag'
   | 'claim'
   | 'show';
 

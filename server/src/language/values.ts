@@ -48,6 +48,8 @@ export interface SubspaceValue {
    * raw Plücker coordinates are the minors of this matrix, not of the reduced one.
    */
   given?: Scalar[][];
+  /** A sentence about how it was obtained, shown in its hover (e.g. the sign rule of an annihilator). */
+  note?: string;
 }
 
 export interface MultivectorValue {
@@ -58,6 +60,55 @@ export interface MultivectorValue {
   pluckerOf?: SubspaceValue;
   /** Computed on demand and cached: decomposability is not free. */
   decomposition?: Decomposition<Scalar>;
+  /** A sentence about how it was obtained, shown in its hover (e.g. the sign rule of a complement). */
+  note?: string;
+}
+
+/** A linear map f: V → U, as the (dim V)×(dim U) matrix whose row i is f(e_i). */
+export interface MapValue {
+  t: 'map';
+  name: string;
+  from: SpaceInfo;
+  to: SpaceInfo;
+  matrix: Scalar[][];
+}
+
+/** A complete flag F_1 ⊂ … ⊂ F_n of V, by vectors f_1 … f_n with F_i = span(f_1 … f_i). */
+export interface FlagValue {
+  t: 'flag';
+  space: SpaceInfo;
+  rows: Scalar[][];
+  /** 'standard', 'opposite' or 'vectors'. */
+  origin: 'standard' | 'opposite' | 'vectors';
+}
+
+/** The Schubert cell of a subspace relative to a flag. */
+export interface SchubertValue {
+  t: 'schubert';
+  subspace: SubspaceValue;
+  flag: FlagValue;
+  jumps: number[];
+  partition: number[];
+  codimension: number;
+  cellDimension: number;
+  echelon: Scalar[][];
+  conditions: number[];
+}
+
+/** V/W: its dimension and representatives of a basis. */
+export interface QuotientValue {
+  t: 'quotient';
+  space: SpaceInfo;
+  subspace: SubspaceValue;
+  representatives: Scalar[][];
+}
+
+/** The k-th compound matrix of a map: the induced map on the k-th exterior power. */
+export interface CompoundValue {
+  t: 'compound';
+  map: MapValue;
+  k: number;
+  matrix: Scalar[][];
 }
 
 /** `[1 2; 3 4]`: only meaningful inside `rows` and `solutions`. */
@@ -99,6 +150,48 @@ export interface ChartValue {
   full: Scalar[][];
 }
 
+/** The matroid of a subspace's basis columns, over the file's field. */
+export interface MatroidValue {
+  t: 'matroid';
+  subspace: SubspaceValue;
+  field: string;
+  rank: number;
+  bases: number[][];
+  loops: number[];
+  coloops: number[];
+  isUniform: boolean;
+}
+
+/** Signs of a Plücker vector (ordered fields only). */
+export interface PositivityValue {
+  t: 'positivity';
+  subspace: SubspaceValue;
+  totallyNonnegative: boolean;
+  totallyPositive: boolean;
+  /** Signs in lexicographic order. */
+  signs: (-1 | 0 | 1)[];
+}
+
+/** How two lines of projective 3-space lie: the pairing, and the common point and plane when they meet. */
+export interface MeetValue {
+  t: 'meet';
+  kind: 'same' | 'intersecting' | 'parallel' | 'skew';
+  pairing: Scalar;
+  commonPoint?: Scalar[];
+  commonPlane?: Scalar[];
+  /** Whether a plane at infinity was declared (only then can 'parallel' be told from 'intersecting'). */
+  infinityDeclared: boolean;
+}
+
+/** A line of projective 3-space as direction and moment. */
+export interface DirectionMomentValue {
+  t: 'direction-moment';
+  direction: Scalar[];
+  moment: Scalar[];
+  coordinates: Scalar[];
+  description: string;
+}
+
 export type Value =
   | ScalarValue
   | IntegerValue
@@ -109,7 +202,16 @@ export type Value =
   | PointValue
   | IndexSetValue
   | SpaceValue
-  | ChartValue;
+  | ChartValue
+  | MapValue
+  | FlagValue
+  | SchubertValue
+  | QuotientValue
+  | CompoundValue
+  | MatroidValue
+  | PositivityValue
+  | MeetValue
+  | DirectionMomentValue;
 
 /** The noun for a value's kind, as messages use it ("a subspace", "a vector in V"). */
 export function describeValue(v: Value): string {
@@ -134,5 +236,23 @@ export function describeValue(v: Value): string {
       return 'a space';
     case 'chart':
       return 'chart coordinates';
+    case 'map':
+      return `a map ${v.from.name} → ${v.to.name}`;
+    case 'flag':
+      return `a flag of ${v.space.name}`;
+    case 'schubert':
+      return 'a Schubert cell';
+    case 'quotient':
+      return `a quotient of ${v.space.name}`;
+    case 'compound':
+      return 'a compound matrix';
+    case 'matroid':
+      return 'a matroid';
+    case 'positivity':
+      return 'a sign pattern';
+    case 'meet':
+      return 'the relative position of two lines';
+    case 'direction-moment':
+      return 'direction and moment of a line';
   }
 }

@@ -9,6 +9,7 @@
  *   last evaluation, carried through the edits;
  * - change, with `wedgework.evaluateOn` = 'type': full evaluation ~300 ms after typing pauses;
  * - configuration change: every open document is evaluated again;
+ * - after every evaluation: the client is asked to refresh its code lenses, if it supports that;
  * - close: its diagnostics are cleared.
  *
  * Every handler is guarded: an exception is logged to the client's output and
@@ -16,6 +17,7 @@
  * the server down.
  */
 import {
+  CodeLensRefreshRequest,
   DidChangeConfigurationNotification,
   TextDocumentSyncKind,
   type CodeLens,
@@ -60,6 +62,8 @@ export function startServer(connection: Connection): void {
   const settingsByUri = new Map<string, Promise<Settings>>();
   let clientHasConfiguration = false;
   let clientRegistersConfigurationChange = false;
+  /** Whether the client re-asks for code lenses when told to (workspace/codeLens/refresh). */
+  let clientRefreshesCodeLenses = false;
   /** For clients without workspace/configuration: initializationOptions, then didChangeConfiguration. */
   let pushedSettings: Settings = DEFAULT_SETTINGS;
 
@@ -130,6 +134,14 @@ export function startServer(connection: Connection): void {
     const analysis = analyze(entry.document.getText(), { evaluate: true, normalization: settings.normalization });
     documents.recordEvaluation(entry, analysis);
     publish(entry);
+    // The editor asks for lenses when the text changes, not when an evaluation finishes: after a save
+    // (same text, new results) or an evaluation slower than the editor's first request, it would keep
+    // showing the lenses of the previous analysis until the next keystroke.
+    if (clientRefreshesCodeLenses) {
+      void connection
+        .sendRequest(CodeLensRefreshRequest.type)
+        .catch((error: unknown) => logFailure('asking the client to refresh code lenses', error));
+    }
   }
 
   const evaluateGuarded = guard('evaluating the document', undefined, evaluate);
@@ -140,6 +152,7 @@ export function startServer(connection: Connection): void {
       const workspace = params.capabilities.workspace;
       clientHasConfiguration = workspace?.configuration === true;
       clientRegistersConfigurationChange = workspace?.didChangeConfiguration?.dynamicRegistration === true;
+      clientRefreshesCodeLenses = workspace?.codeLens?.refreshSupport === true;
       pushedSettings = parseSettings(params.initializationOptions);
       const result: InitializeResult = {
         capabilities: SERVER_CAPABILITIES,

@@ -1,0 +1,177 @@
+/**
+ * Matroids and positivity of subspaces, and lines of projective 3-space:
+ * the built-ins and the property claims (`claim W is totally nonnegative`).
+ */
+import { matroidOfPlucker, rankOfColumns } from '../engine/matroid.js';
+import { cyclicShift, positivityOf } from '../engine/positivity.js';
+import { describeDirectionMoment, directionMoment, kleinPairing, lineMeet, type DirectionMomentOptions } from '../engine/lines-p3.js';
+import { toDense } from '../engine/multivector.js';
+import { binomialBig, unrankLex } from '../engine/subsets.js';
+import { rref } from '../engine/matrix.js';
+import type { Call } from './ast.js';
+import { subspacePlucker, type Environment } from './environment.js';
+import { checkCoordinateLimit } from './expressions.js';
+import { fail } from './failure.js';
+import type { Evaluate } from './geometry.js';
+import type { Span } from './types.js';
+import { describeValue, type MatroidValue, type PositivityValue, type SubspaceValue, type Value } from './values.js';
+
+function subspaceArg(v: Value, span: Span, what: string): SubspaceValue {
+  if (v.t !== 'subspace') fail('type/operand', span, `${what} takes a subspace, found ${describeValue(v)}`);
+  return v;
+}
+
+export function matroidOfSubspace(env: Environment, w: SubspaceValue, span: Span): MatroidValue {
+  checkCoordinateLimit(env, w.space.dim, w.basis.length, span);
+  const m = matroidOfPlucker(env.F, toDense(env.F, subspacePlucker(env, w)), w.space.dim, w.basis.length);
+  return { t: 'matroid', subspace: w, field: m.field, rank: m.rank, bases: m.bases, loops: m.loops, coloops: m.coloops, isUniform: m.isUniform };
+}
+
+export function positivityOfSubspace(env: Environment, w: SubspaceValue, span: Span): PositivityValue {
+  if (!env.F.sign) fail('type/unordered-field', span, `positivity needs an ordered field such as QQ: signs are not defined over ${env.F.name}`);
+  checkCoordinateLimit(env, w.space.dim, w.basis.length, span);
+  const p = positivityOf(env.F, toDense(env.F, subspacePlucker(env, w)));
+  return { t: 'positivity', subspace: w, totallyNonnegative: p.totallyNonnegative, totallyPositive: p.totallyPositive, signs: p.signPattern };
+}
+
+/** A line of projective 3-space: a 2-dimensional subspace of a 4-dimensional space. */
+function lineArg(v: Value, span: Span): SubspaceValue {
+  if (v.t !== 'subspace' || v.space.dim !== 4 || v.basis.length !== 2) {
+    fail('type/not-a-line', span, `a line of projective 3-space is a 2-dimensional subspace of a 4-dimensional space, found ${describeValue(v)}${v.t === 'subspace' ? ` of dimension ${v.basis.length} in a ${v.space.dim}-dimensional space` : ''}`);
+  }
+  return v;
+}
+
+export function lineOptions(env: Environment): DirectionMomentOptions {
+  return {
+    order: env.convention.lines,
+    momentSign: env.convention.moment === 'pxd' ? 'p×d' : 'd×p',
+    homogeneousIndex: env.convention.homogeneous === 'last' ? 3 : 0,
+  };
+}
+
+/** Rewrites the engine's 0-based point labels (x0 … x3, p01 …) into the file's labels. */
+function relabel(env: Environment, text: string): string {
+  if (env.convention.firstLabel === 0) return text;
+  return text.replace(/\b([px])([0-3]+)\b/g, (_, letter: string, digits: string) => `${letter}${[...digits].map((d) => Number(d) + 1).join('')}`).replace(/\ba(\d)\b/g, (_, d: string) => `a${Number(d) + 1}`).replace(/\bb(\d)\b/g, (_, d: string) => `b${Number(d) + 1}`);
+}
+
+export function callCombinatorics(env: Environment, e: Call, evaluate: Evaluate): Value | undefined {
+  const F = env.F;
+  const arg = (i: number) => evaluate(e.args[i]!);
+  const arity = (n: number, signature: string) => {
+    if (e.args.length !== n) fail('type/arguments', e.span, `${signature} takes ${n} argument${n === 1 ? '' : 's'}, found ${e.args.length}`);
+  };
+  switch (e.callee.name) {
+    case 'matroid': {
+      arity(1, 'matroid(W)');
+      return matroidOfSubspace(env, subspaceArg(arg(0), e.args[0]!.span, 'matroid'), e.span);
+    }
+    case 'positivity': {
+      arity(1, 'positivity(W)');
+      return positivityOfSubspace(env, subspaceArg(arg(0), e.args[0]!.span, 'positivity'), e.span);
+    }
+    case 'rank': {
+      arity(2, 'rank(W, I)');
+      const w = subspaceArg(arg(0), e.args[0]!.span, 'rank');
+      const columns = columnSet(env, e.args[1]!, w.space.dim);
+      return { t: 'integer', value: rankOfColumns(F, w.basis, columns) };
+    }
+    case 'shift': {
+      arity(1, 'shift(W)');
+      const w = subspaceArg(arg(0), e.args[0]!.span, 'shift');
+      const rows = cyclicShift(F, w.basis, w.space.dim, w.basis.length);
+      const ech = rref(F, rows, w.space.dim);
+      return {
+        t: 'subspace',
+        space: w.space,
+        basis: ech.rows,
+        pivots: ech.pivots,
+        given: rows,
+        note: `The cyclic shift: columns (v1, …, vn) become (v2, …, vn, (−1)^(k−1)·v1) with k = ${w.basis.length}, so p'_I = p_{I+1} and total nonnegativity is kept.`,
+      };
+    }
+    case 'pairing': {
+      arity(2, 'pairing(L1, L2)');
+      const a = lineArg(arg(0), e.args[0]!.span);
+      const b = lineArg(arg(1), e.args[1]!.span);
+      return { t: 'scalar', value: kleinPairing(F, toDense(F, subspacePlucker(env, a)), toDense(F, subspacePlucker(env, b))) };
+    }
+    case 'meet': {
+      arity(2, 'meet(L1, L2)');
+      const a = lineArg(arg(0), e.args[0]!.span);
+      const b = lineArg(arg(1), e.args[1]!.span);
+      const h = env.convention.homogeneous;
+      const infinity = h === undefined ? undefined : [0, 1, 2, 3].map((i) => (i === (h === 'last' ? 3 : 0) ? F.one : F.zero));
+      const m = lineMeet(F, a.basis, b.basis, infinity);
+      return {
+        t: 'meet',
+        kind: m.kind,
+        pairing: m.pairing,
+        ...(m.commonPoint ? { commonPoint: m.commonPoint } : {}),
+        ...(m.commonPlane ? { commonPlane: m.commonPlane } : {}),
+        infinityDeclared: h !== undefined,
+      };
+    }
+    case 'direction_moment': {
+      arity(1, 'direction_moment(L)');
+      const l = lineArg(arg(0), e.args[0]!.span);
+      const options = lineOptions(env);
+      const dm = directionMoment(F, toDense(F, subspacePlucker(env, l)), options);
+      return { t: 'direction-moment', direction: dm.direction, moment: dm.moment, coordinates: dm.coordinates, description: relabel(env, describeDirectionMoment(options)) };
+    }
+    default:
+      return undefined;
+  }
+}
+
+/** `13` or `(1, 3)` as 0-based columns of an n-space. */
+function columnSet(env: Environment, arg: Call['args'][number], n: number): number[] {
+  const singleDigits = n - 1 + env.convention.firstLabel <= 9;
+  let labels: number[];
+  if (arg.type === 'number' && /^\d+$/.test(arg.text)) labels = singleDigits ? [...arg.text].map(Number) : [Number(arg.text)];
+  else if (arg.type === 'tuple' && arg.items.every((x) => x.type === 'number' && /^\d+$/.test(x.text))) labels = arg.items.map((x) => Number((x as { text: string }).text));
+  else fail('type/index-set', arg.span, 'expected a set of columns such as 13 or (1, 3)');
+  const positions = labels.map((l) => l - env.convention.firstLabel);
+  if (positions.some((p) => p < 0 || p >= n)) fail('type/bad-label', arg.span, `a column label is outside ${env.labels.position(0)}…${env.labels.position(n - 1)}`);
+  if (new Set(positions).size !== positions.length) fail('type/repeated-label', arg.span, 'the column set repeats a label');
+  return positions;
+}
+
+/** `claim W is totally nonnegative` and the other property claims. */
+export function propertyHolds(env: Environment, subject: Value, property: string, span: Span): { holds: boolean; found: string } {
+  switch (property) {
+    case 'totally-nonnegative':
+    case 'totally-positive': {
+      const w = subspaceArg(subject, span, 'positivity');
+      const p = positivityOfSubspace(env, w, span);
+      const wantPositive = property === 'totally-positive';
+      const holds = wantPositive ? p.totallyPositive : p.totallyNonnegative;
+      const n = w.space.dim;
+      const k = w.basis.length;
+      const dense = toDense(env.F, subspacePlucker(env, w));
+      const labelOf = (i: number) => env.labels.name(unrankLex(i, n, k), n);
+      if (holds) return { holds, found: `all nonzero Plücker coordinates have one sign${p.totallyPositive ? ' and none is zero' : ''}` };
+      const pos = p.signs.indexOf(1);
+      const neg = p.signs.indexOf(-1);
+      if (pos >= 0 && neg >= 0) {
+        return { holds, found: `${labelOf(pos)} = ${env.F.format(dense[pos])} and ${labelOf(neg)} = ${env.F.format(dense[neg])} have opposite signs` };
+      }
+      const zero = p.signs.indexOf(0);
+      return { holds, found: `${labelOf(zero)} = 0, so it is totally nonnegative but not totally positive` };
+    }
+    case 'uniform': {
+      const w = subspaceArg(subject, span, 'the matroid');
+      const m = matroidOfSubspace(env, w, span);
+      const total = binomialBig(w.space.dim, w.basis.length);
+      return {
+        holds: m.isUniform,
+        found: m.isUniform
+          ? `every one of the C(${w.space.dim},${w.basis.length}) = ${total} column sets is a basis over ${m.field}`
+          : `${m.bases.length} of the ${total} column sets are bases over ${m.field}`,
+      };
+    }
+    default:
+      fail('type/unknown-property', span, `unknown property '${property.replace(/-/g, ' ')}': the properties are totally nonnegative, totally positive, uniform and decomposable`);
+  }
+}
