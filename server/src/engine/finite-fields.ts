@@ -36,12 +36,12 @@ export class NotPrimePowerError extends NotPrimeError {
  * `FieldOrderLimitError` for a proper prime power above 2^20. Prime fields have
  * no such limit.
  */
-export function finiteField(q: bigint): Field<any> {
+export function finiteField(q: bigint, options?: { generator?: string }): Field<any> {
   const decomposition = primePowerDecomposition(q);
   if (decomposition === undefined) throw new NotPrimePowerError(q);
   const { prime, exponent } = decomposition;
   if (exponent === 1) return primeField(prime);
-  return extensionField(prime, exponent);
+  return extensionField(prime, exponent, options);
 }
 
 function hasOrder<T>(F: Field<T>): F is Field<T> & Pick<FiniteField, 'order'> {

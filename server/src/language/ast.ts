@@ -90,6 +90,8 @@ export interface FieldStmt {
   keyword: Span;
   name: Ident;
   modulus?: NumberLit;
+  /** `generator w`: the name of the class of x in GF(q) = GF(p)[x]/(f), for q a prime power. */
+  generator?: Ident;
 }
 
 /** `normalize first-one`: the hyphenated words are joined into one `mode.name`. */

@@ -121,12 +121,18 @@ class StatementBuilder {
       case 'fieldStmt': {
         const keyword = token(inner, 'keyword');
         const modulus = optionalToken(inner, 'modulus');
+        const word = optionalToken(inner, 'generatorWord');
+        const generator = optionalToken(inner, 'generator');
+        if (word && word.image !== 'generator') {
+          this.reject('syntax/unexpected-token', tokenSpan(word), `expected 'generator' and a name after the field, as in field GF(9) generator w; found '${word.image}'`);
+        }
         return {
           type: 'field',
           span: extent,
           keyword: tokenSpan(keyword),
           name: ident(token(inner, 'name')),
           ...(modulus ? { modulus: numberLit(modulus) } : {}),
+          ...(generator ? { generator: ident(generator) } : {}),
         };
       }
       case 'normalizeStmt': {

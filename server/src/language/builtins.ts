@@ -27,6 +27,10 @@ export const BUILTINS: readonly Builtin[] = [
   { name: 'pairing', signature: 'pairing(L1, L2)', summary: 'the Klein pairing of two lines of projective 3-space: 0 exactly when they meet' },
   { name: 'meet', signature: 'meet(L1, L2)', summary: 'whether two lines meet, are parallel or skew, with their common point and plane' },
   { name: 'direction_moment', signature: 'direction_moment(L)', summary: 'a line of projective 3-space as direction and moment' },
+  { name: 'count', signature: 'count(k, V)', summary: 'the number of k-dimensional subspaces of V over a finite field (a Gaussian binomial)' },
+  { name: 'subspaces', signature: 'subspaces(k, V)', summary: 'every k-dimensional subspace of V over a finite field, for small cases' },
+  { name: 'distance', signature: 'distance(U, W)', summary: 'the subspace distance dim U + dim W − 2 dim(U ∩ W)' },
+  { name: 'min_distance', signature: 'min_distance(U1, U2, …)', summary: 'the minimum subspace distance of a code, with the pair reaching it' },
   { name: 'schubert', signature: 'schubert(W) or schubert(W, F)', summary: 'the Schubert cell of W relative to a flag (standard by default)' },
 ];
 

@@ -43,8 +43,8 @@ export function checkClaim(env: Environment, source: string, s: ClaimStmt): Clai
   // A count is compared with a whole number as written, not with its image in
   // the field: over GF(2), `dim A = 3` must not read 3 as 1.
   const other: Value =
-    subject.t === 'integer' && otherExpr.type === 'number' && /^\d+$/.test(otherExpr.text)
-      ? { t: 'integer', value: Number(otherExpr.text) }
+    (subject.t === 'integer' || subject.t === 'count') && otherExpr.type === 'number' && /^\d+$/.test(otherExpr.text)
+      ? { t: 'count', value: BigInt(otherExpr.text), what: 'a number' }
       : evaluate(env, otherExpr, {});
   const otherText = source.slice(s.relation.other!.span.start, s.relation.other!.span.end).replace(/\s+/g, ' ');
   if (op === 'in' || op === 'not in') return membershipClaim(env, subject, other, subjectText, otherText, claimed, op === 'in', s);
@@ -165,14 +165,14 @@ function equalityClaim(
   });
 
   // A count against a number: dim L = 2.
-  if (subject.t === 'integer' || other.t === 'integer') {
-    const a = subject.t === 'integer' ? subject.value : undefined;
-    const b = other.t === 'integer' ? other.value : undefined;
+  const whole = (v: Value): bigint | undefined => (v.t === 'integer' ? BigInt(v.value) : v.t === 'count' ? v.value : undefined);
+  if (whole(subject) !== undefined || whole(other) !== undefined) {
+    const a = whole(subject);
+    const b = whole(other);
     if (a === undefined || b === undefined) {
       fail('type/operand', s.relation.span, `cannot compare ${describeValue(subject)} with ${describeValue(other)}`);
     }
-    const counted = subject.t === 'integer' ? subjectText : otherText;
-    const found = a === b ? `${counted} = ${subject.t === 'integer' ? a : b}` : `${counted} is ${subject.t === 'integer' ? a : b}, not ${subject.t === 'integer' ? b : a}`;
+    const found = a === b ? `${subjectText} = ${a}` : `${subjectText} is ${a}, not ${b}`;
     return verdict(a === b, found, '', 'claim/dimension');
   }
 

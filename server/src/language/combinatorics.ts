@@ -7,6 +7,9 @@ import { cyclicShift, positivityOf } from '../engine/positivity.js';
 import { describeDirectionMoment, directionMoment, kleinPairing, lineMeet, type DirectionMomentOptions } from '../engine/lines-p3.js';
 import { toDense } from '../engine/multivector.js';
 import { binomialBig, unrankLex } from '../engine/subsets.js';
+import { EnumerationLimitError, enumerateSubspaces, gaussianBinomial } from '../engine/grassmannian.js';
+import { finiteFieldOrder } from '../engine/finite-fields.js';
+import { minimumDistance, subspaceDistance } from '../engine/subspace-codes.js';
 import { rref } from '../engine/matrix.js';
 import type { Call } from './ast.js';
 import { subspacePlucker, type Environment } from './environment.js';
@@ -14,7 +17,7 @@ import { checkCoordinateLimit } from './expressions.js';
 import { fail } from './failure.js';
 import type { Evaluate } from './geometry.js';
 import type { Span } from './types.js';
-import { describeValue, type MatroidValue, type PositivityValue, type SubspaceValue, type Value } from './values.js';
+import { describeValue, type MatroidValue, type PositivityValue, type SpaceInfo, type SubspaceValue, type Value } from './values.js';
 
 function subspaceArg(v: Value, span: Span, what: string): SubspaceValue {
   if (v.t !== 'subspace') fail('type/operand', span, `${what} takes a subspace, found ${describeValue(v)}`);
@@ -120,9 +123,60 @@ export function callCombinatorics(env: Environment, e: Call, evaluate: Evaluate)
       const dm = directionMoment(F, toDense(F, subspacePlucker(env, l)), options);
       return { t: 'direction-moment', direction: dm.direction, moment: dm.moment, coordinates: dm.coordinates, description: relabel(env, describeDirectionMoment(options)) };
     }
+    case 'count': {
+      arity(2, 'count(k, V)');
+      const [k, space] = degreeAndSpace(env, e, evaluate);
+      const q = finiteFieldOrder(F);
+      if (q === undefined) fail('type/infinite-field', e.span, `over ${F.name} there are infinitely many ${k}-subspaces; count needs a finite field GF(q)`);
+      return { t: 'count', value: gaussianBinomial(space.dim, k, q), what: `${k}-dimensional subspaces of ${F.name}^${space.dim} (the Gaussian binomial [${space.dim} choose ${k}]_${q})` };
+    }
+    case 'subspaces': {
+      arity(2, 'subspaces(k, V)');
+      const [k, space] = degreeAndSpace(env, e, evaluate);
+      const q = finiteFieldOrder(F);
+      if (q === undefined) fail('type/infinite-field', e.span, `over ${F.name} there are infinitely many ${k}-subspaces; subspaces needs a finite field GF(q)`);
+      try {
+        return { t: 'subspaces', space, k, bases: enumerateSubspaces(F, space.dim, k, LIST_LIMIT) };
+      } catch (err) {
+        if (err instanceof EnumerationLimitError) {
+          fail('limit/too-many-subspaces', e.span, `GF(${q})^${space.dim} has ${err.count} subspaces of dimension ${k}, more than the ${LIST_LIMIT} a list shows; count(${k}, ${space.name}) gives the number`);
+        }
+        throw err;
+      }
+    }
+    case 'distance': {
+      arity(2, 'distance(U, W)');
+      const u = subspaceArg(arg(0), e.args[0]!.span, 'distance');
+      const w = subspaceArg(arg(1), e.args[1]!.span, 'distance');
+      if (u.space.name !== w.space.name) fail('type/space-mismatch', e.args[1]!.span, `the subspaces lie in ${u.space.name} and ${w.space.name}`);
+      return { t: 'integer', value: subspaceDistance(F, u.basis, w.basis, u.space.dim) };
+    }
+    case 'min_distance': {
+      if (e.args.length < 2) fail('type/arguments', e.span, 'min_distance(U1, U2, …) takes at least two subspaces');
+      const all = e.args.map((a, i) => subspaceArg(arg(i), a.span, 'min_distance'));
+      all.forEach((w, i) => {
+        if (w.space.name !== all[0]!.space.name) fail('type/space-mismatch', e.args[i]!.span, `all subspaces of a code lie in one space; this one is in ${w.space.name}`);
+      });
+      const m = minimumDistance(F, all.map((w) => w.basis), all[0]!.space.dim)!;
+      const names = e.args.map((a) => env.source.slice(a.span.start, a.span.end));
+      return { t: 'count', value: BigInt(m.distance), what: `the minimum subspace distance dim U + dim W − 2·dim(U ∩ W) over ${all.length} subspaces, reached by ${names[m.pair[0]]} and ${names[m.pair[1]]}` };
+    }
     default:
       return undefined;
   }
+}
+
+/** How many subspaces `subspaces(k, V)` lists at most. */
+const LIST_LIMIT = 1000;
+
+function degreeAndSpace(env: Environment, e: Call, evaluate: Evaluate): [number, SpaceInfo] {
+  const kArg = e.args[0]!;
+  if (kArg.type !== 'number' || !/^\d+$/.test(kArg.text)) fail('type/operand', kArg.span, 'the dimension k is a whole number');
+  const v = evaluate(e.args[1]!);
+  if (v.t !== 'space') fail('type/operand', e.args[1]!.span, `expected a space, found ${describeValue(v)}`);
+  const k = Number(kArg.text);
+  if (k > v.space.dim) fail('type/operand', kArg.span, `k = ${k} is above dim ${v.space.name} = ${v.space.dim}`);
+  return [k, v.space];
 }
 
 /** `13` or `(1, 3)` as 0-based columns of an n-space. */

@@ -66,12 +66,20 @@ function fallbackWords(asked: Normalization, applied: Normalization): string {
   return ` (asked for ${asked}, which needs the rationals)`;
 }
 
+/** The field with its construction: `GF(4) = GF(2)[a]/(a^2 + a + 1)` for a prime power, else its name. */
+export function fieldWords(F: AnyField): string {
+  const f = F as AnyField & { definingPolynomialText?: string; generatorName?: string };
+  if (!f.definingPolynomialText || !f.generatorName) return F.name;
+  const g = f.generatorName;
+  return `${F.name} = GF(${F.characteristic})[${g}]/(${f.definingPolynomialText.replace(/x/g, g)})`;
+}
+
 /** One sentence naming every convention, for the end of a hover. */
 export function conventionSentence(c: Convention, applied?: Normalization): string {
   const norm = applied ?? c.normalization;
   const order = c.order === 'lex' ? 'lexicographic' : 'colexicographic';
   return (
-    `Convention: field ${c.field.name}; index sets in ${order} order, labels from ${c.firstLabel}; ` +
+    `Convention: field ${fieldWords(c.field)}; index sets in ${order} order, labels from ${c.firstLabel}; ` +
     `basis vectors as ${c.layout}; projective points shown as ${normalizationWords(norm)}${fallbackWords(c.normalization, norm)}.`
   );
 }

@@ -248,6 +248,10 @@ function divide(env: Environment, e: Binary, left: Value, right: Value): Value {
 }
 
 function wedge(env: Environment, e: Binary, left: Value, right: Value): Value {
+  // Between scalars `^` is a power with a whole exponent as written: a^2 + a + 1 in GF(4).
+  if (left.t === 'scalar' && e.right.type === 'number' && /^\d+$/.test(e.right.text)) {
+    return { t: 'scalar', value: power(env, left.value, BigInt(e.right.text)) };
+  }
   const a = asMultivector(env, left);
   const b = asMultivector(env, right);
   if (!a || !b) {
@@ -264,6 +268,16 @@ function intersect(env: Environment, e: Binary, left: Value, right: Value): Valu
   }
   sameSpace(left.space, right.space, e.opSpan, 'cannot intersect subspaces of different spaces');
   return subspaceOf(env, left.space, intersectRowSpaces(env.F, left.basis, right.basis, left.space.dim));
+}
+
+function power(env: Environment, base: Scalar, exponent: bigint): Scalar {
+  let result = env.F.one;
+  let b = base;
+  for (let e = exponent; e > 0n; e >>= 1n) {
+    if (e & 1n) result = env.F.mul(result, b);
+    b = env.F.mul(b, b);
+  }
+  return result;
 }
 
 /** The subspace spanned by `rows`, reduced; `given` keeps the user's rows when they are independent. */
@@ -286,7 +300,7 @@ function contextSpace(env: Environment, ctx: ExprContext, span: Span, width: num
     }
     return ctx.space;
   }
-  const all = [...env.spaces.values()];
+  const all = [...env.spaces.values()].filter((s) => !s.derived);
   if (all.length === 0) fail('type/no-space', span, `${what} needs a space: declare one first, e.g. \`space V dim ${width ?? 4}\``);
   const fitting = width === undefined ? all : all.filter((s) => s.dim === width);
   if (all.length === 1) {

@@ -61,6 +61,7 @@ export function dualSpace(env: Environment, space: SpaceInfo): SpaceInfo {
       basisNames: space.basisNames.map((b) => (b.endsWith('*') ? b.slice(0, -1) : `${b}*`)),
       namedBasis: space.namedBasis,
       declaration: space.declaration,
+      derived: true,
     };
     env.spaces.set(name, dual);
   }

@@ -100,6 +100,7 @@ export class StatementParser extends CstParser {
     });
   });
 
+  /** `field QQ`, `field GF(7)`, `field GF(9) generator w` (the name of a generator of GF(q) over GF(p)). */
   fieldStmt = this.RULE('fieldStmt', () => {
     this.CONSUME(Field, { LABEL: 'keyword' });
     this.CONSUME(Identifier, { LABEL: 'name' });
@@ -107,6 +108,10 @@ export class StatementParser extends CstParser {
       this.CONSUME(LParen);
       this.CONSUME(NumberLiteral, { LABEL: 'modulus' });
       this.CONSUME(RParen);
+    });
+    this.OPTION2(() => {
+      this.CONSUME2(Identifier, { LABEL: 'generatorWord' });
+      this.CONSUME3(Identifier, { LABEL: 'generator' });
     });
   });
 

@@ -65,6 +65,15 @@ export function presentPositivity(env: Environment, p: PositivityValue): Present
   };
 }
 
+/** p12·q34 − p13·q24 + p14·q23 + p23·q14 − p24·q13 + p34·q12 in the file's labels. */
+function kleinFormula(env: Environment): string {
+  const pairs: [number[], number[], string][] = [
+    [[0, 1], [2, 3], ''], [[0, 2], [1, 3], ' − '], [[0, 3], [1, 2], ' + '],
+    [[1, 2], [0, 3], ' + '], [[1, 3], [0, 2], ' − '], [[2, 3], [0, 1], ' + '],
+  ];
+  return pairs.map(([a, b, sign]) => `${sign}${env.labels.name(a, 4)}·q${env.labels.label(b, 4)}`).join('');
+}
+
 export function presentMeet(env: Environment, m: MeetValue): Presented {
   const F = env.F;
   const words: Record<MeetValue['kind'], string> = {
@@ -74,7 +83,7 @@ export function presentMeet(env: Environment, m: MeetValue): Presented {
     skew: 'skew (they do not meet)',
   };
   const lines = [
-    `The two lines are **${words[m.kind]}**: their Klein pairing p12·q34 − p13·q24 + p14·q23 + p23·q14 − p24·q13 + p34·q23-type sum is ${F.format(m.pairing)} (zero exactly when they meet — parallel lines included).`,
+    `The two lines are **${words[m.kind]}**: the Klein pairing of their Plücker vectors p and q, ${kleinFormula(env)}, is ${F.format(m.pairing)} (zero exactly when they meet — parallel lines included).`,
   ];
   if (m.commonPoint) lines.push('', `Common point: ${formatPoint(F, m.commonPoint)}; common plane: ${formatPoint(F, m.commonPlane!)} (as a dual vector).`);
   if (!m.infinityDeclared && m.kind === 'intersecting') {

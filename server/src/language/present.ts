@@ -7,6 +7,7 @@
 import { toDense, sortedTerms } from '../engine/multivector.js';
 import { binomialBig } from '../engine/subsets.js';
 import { grassmannianDimension } from '../engine/grassmannian.js';
+import { finiteFieldOrder } from '../engine/finite-fields.js';
 import { conventionJson, conventionSentence, conventionTag } from './conventions.js';
 import { displayPoint, type DisplayedPoint } from './coordinates.js';
 import { decompositionOf, describeRelation, relationFormula, relationLatex, relationValues } from './decomposition.js';
@@ -286,7 +287,7 @@ export function presentSpace(env: Environment, space: SpaceInfo): Presented {
   return {
     summary: `${env.F.name}^${space.dim} · basis ${abbreviate(space.basisNames)}`,
     hover: `A ${space.dim}-dimensional space over ${env.F.name} with basis ${space.basisNames.join(', ')}${space.namedBasis ? '' : ' (the default names)'}.`,
-    latex: `${nameLatex(space.name)} \\cong ${env.F.name === 'QQ' ? '\\mathbb{Q}' : `\\mathbb{F}_{${env.F.characteristic}}`}^{${space.dim}}`,
+    latex: `${nameLatex(space.name)} \\cong ${env.F.name === 'QQ' ? '\\mathbb{Q}' : `\\mathbb{F}_{${finiteFieldOrder(env.F) ?? env.F.characteristic}}`}^{${space.dim}}`,
     json: { dim: space.dim, basis: space.basisNames, field: env.F.name },
   };
 }
@@ -336,6 +337,17 @@ export function presentValue(env: Environment, v: Value): Presented {
       return presentMeet(env, v);
     case 'direction-moment':
       return presentDirectionMoment(env, v);
+    case 'count':
+      return { summary: `${v.value}`, hover: `${v.value}: ${v.what}.`, latex: `${v.value}`, json: { value: v.value.toString(), what: v.what } };
+    case 'subspaces': {
+      const shown = v.bases.slice(0, 40).map((b) => formatMatrixInline(env.F, b)).join('\n');
+      return {
+        summary: `${v.bases.length} subspaces of dimension ${v.k} in ${v.space.name}`,
+        hover: [`All ${v.bases.length} subspaces of dimension ${v.k} of ${v.space.name} over ${env.F.name}, each by its reduced basis:`, '', codeBlock(shown + (v.bases.length > 40 ? `\n… (${v.bases.length} in all)` : ''))].join('\n'),
+        latex: `${v.bases.length}`,
+        json: { count: v.bases.length, bases: v.bases.map((b) => b.map((r) => r.map((x) => s(env, x)))) },
+      };
+    }
   }
 }
 

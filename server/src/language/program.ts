@@ -3,7 +3,9 @@
  * results and problems. A statement that fails reports one problem and leaves
  * its name bound to nothing, so later uses stay quiet instead of cascading.
  */
-import { fieldByName, type AnyField } from '../engine/fields.js';
+import type { AnyField } from '../engine/fields.js';
+import { finiteField } from '../engine/finite-fields.js';
+import { FieldOrderLimitError } from '../engine/extension-field.js';
 import { QQ } from '../engine/rational.js';
 import { NotPrimeError } from '../engine/prime-field.js';
 import { fromVector, isZeroMV } from '../engine/multivector.js';
@@ -75,15 +77,20 @@ function fieldOf(s: FieldStmt): AnyField {
     if (!s.modulus) fail('type/unknown-field', s.name.span, 'GF needs a prime: GF(p), e.g. GF(7)');
     if (!/^\d+$/.test(s.modulus.text)) fail('type/unknown-field', s.modulus.span, `the modulus of GF must be a whole number, found ${s.modulus.text}`);
     try {
-      return fieldByName('GF', BigInt(s.modulus.text));
+      const field = finiteField(BigInt(s.modulus.text), s.generator ? { generator: s.generator.name } : undefined);
+      if (s.generator && field.characteristic === BigInt(s.modulus.text)) {
+        fail('type/unknown-field', s.generator.span, `GF(${s.modulus.text}) is a prime field: its elements are the integers mod ${s.modulus.text}, with no generator to name`);
+      }
+      return field;
     } catch (err) {
       if (err instanceof NotPrimeError) {
-        fail('math/not-prime', s.modulus.span, `GF(${s.modulus.text}): ${s.modulus.text} is not a prime; prime fields GF(p) need a prime p`);
+        fail('math/not-prime', s.modulus.span, `GF(${s.modulus.text}): ${s.modulus.text} is not a prime power; finite fields GF(q) need q = p^m for a prime p`);
       }
+      if (err instanceof FieldOrderLimitError) fail('limit/field-order', s.modulus.span, err.message);
       throw err;
     }
   }
-  fail('type/unknown-field', s.name.span, `unknown field '${name}': write QQ (the rationals) or GF(p) for a prime p`);
+  fail('type/unknown-field', s.name.span, `unknown field '${name}': write QQ (the rationals) or GF(q) for a prime power q`);
 }
 
 class ProgramEvaluator {
@@ -321,6 +328,11 @@ export function evaluateProgram(program: Program, source: string, fileConvention
     bindings: new Map(),
     problems,
   };
+  const generator = program.statements.find((s): s is FieldStmt => s.type === 'field' && s.generator !== undefined)?.generator;
+  const generatorElement = (field as { generatorElement?: () => unknown }).generatorElement;
+  if (generator && generatorElement) {
+    env.bindings.set(generator.name, { value: { t: 'scalar', value: generatorElement.call(field) }, declSpan: generator.span, nameSpan: generator.span });
+  }
   const evaluator = new ProgramEvaluator(env, source);
   evaluator.run(program);
   return { results: evaluator.results, problems };

@@ -8,7 +8,7 @@ import { BUILTIN_NAMES, BUILTINS, FIELD_NAMES } from './builtins.js';
 import { defaultBasisNames } from './conventions.js';
 import type { Problem, Span } from './types.js';
 
-export type SymbolKind = 'space' | 'basis' | 'vector' | 'subspace' | 'multivector' | 'map' | 'flag';
+export type SymbolKind = 'space' | 'basis' | 'vector' | 'subspace' | 'multivector' | 'map' | 'flag' | 'scalar';
 
 export interface SymbolInfo {
   name: string;
@@ -189,6 +189,8 @@ export function resolveNames(program: Program, firstLabel: 0 | 1 = 1): Resolutio
   for (const s of program.statements) {
     switch (s.type) {
       case 'field':
+        if (s.generator) r.declare({ name: s.generator.name, kind: 'scalar', nameSpan: s.generator.span, declSpan: s.span });
+        break;
       case 'normalize':
       case 'convention':
         break;

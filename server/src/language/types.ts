@@ -115,7 +115,7 @@ export interface Analysis {
 export interface NameUse {
   span: Span;
   name: string;
-  kind: 'space' | 'basis' | 'vector' | 'subspace' | 'multivector' | 'map' | 'flag';
+  kind: 'space' | 'basis' | 'vector' | 'subspace' | 'multivector' | 'map' | 'flag' | 'scalar';
   /** For a basis vector: the space it belongs to. */
   space?: string;
 }

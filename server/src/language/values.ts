@@ -14,6 +14,8 @@ export interface SpaceInfo {
   /** Whether the basis names were written by the user (`basis a b c`) or are the default e1…en. */
   namedBasis: boolean;
   declaration: Span;
+  /** A space the file did not declare (the dual V* of an annihilator): never guessed as the home of a literal. */
+  derived?: boolean;
 }
 
 // The field is `Field<any>`: every value below holds scalars of that one field.
@@ -192,6 +194,21 @@ export interface DirectionMomentValue {
   description: string;
 }
 
+/** A count too large for a plain number (the number of k-subspaces of GF(q)^n), with what it counts. */
+export interface CountValue {
+  t: 'count';
+  value: bigint;
+  what: string;
+}
+
+/** A bounded list of subspaces (all k-subspaces of a small space over a finite field). */
+export interface SubspaceListValue {
+  t: 'subspaces';
+  space: SpaceInfo;
+  k: number;
+  bases: Scalar[][][];
+}
+
 export type Value =
   | ScalarValue
   | IntegerValue
@@ -211,7 +228,9 @@ export type Value =
   | MatroidValue
   | PositivityValue
   | MeetValue
-  | DirectionMomentValue;
+  | DirectionMomentValue
+  | CountValue
+  | SubspaceListValue;
 
 /** The noun for a value's kind, as messages use it ("a subspace", "a vector in V"). */
 export function describeValue(v: Value): string {
@@ -254,5 +273,9 @@ export function describeValue(v: Value): string {
       return 'the relative position of two lines';
     case 'direction-moment':
       return 'direction and moment of a line';
+    case 'count':
+      return 'a count';
+    case 'subspaces':
+      return 'a list of subspaces';
   }
 }
