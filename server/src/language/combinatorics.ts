@@ -106,7 +106,8 @@ export function callCombinatorics(env: Environment, e: Call, evaluate: Evaluate)
       const b = lineArg(arg(1), e.args[1]!.span);
       const h = env.convention.homogeneous;
       const infinity = h === undefined ? undefined : [0, 1, 2, 3].map((i) => (i === (h === 'last' ? 3 : 0) ? F.one : F.zero));
-      const m = lineMeet(F, a.basis, b.basis, infinity);
+      // The pairing is bilinear in the two Plücker vectors: take the points as the user gave them, so it is det[a; b; c; d].
+      const m = lineMeet(F, a.given ?? a.basis, b.given ?? b.basis, infinity);
       return {
         t: 'meet',
         kind: m.kind,
