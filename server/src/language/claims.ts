@@ -222,7 +222,14 @@ function equalityClaim(
   }
 
   if (subject.t === 'scalar' && other.t === 'scalar') {
-    return verdict(F.eq(subject.value, other.value), `${subjectText} = ${F.format(subject.value)} and ${otherText} = ${F.format(other.value)}`);
+    const equal = F.eq(subject.value, other.value);
+    const literal = s.relation.other!.type === 'number' || s.relation.other!.type === 'unary';
+    const found = equal
+      ? `${subjectText} = ${F.format(subject.value)}`
+      : literal
+        ? `${subjectText} is ${F.format(subject.value)}, not ${F.format(other.value)}`
+        : `${subjectText} = ${F.format(subject.value)} and ${otherText} = ${F.format(other.value)}`;
+    return verdict(equal, found);
   }
 
   // `omega ^ omega = 0`: a vector or multivector against the scalar zero.

@@ -54,11 +54,10 @@ class Resolver {
   constructor(readonly broken: ReadonlySet<string>) {}
 
   declare(info: SymbolInfo): void {
-    if (BUILTIN_NAMES.has(info.name) || FIELD_NAMES.has(info.name)) {
-      const what = BUILTIN_NAMES.has(info.name) ? 'a built-in operation' : 'a field';
-      this.problems.push(
-        NAME_PROBLEM('name/reserved', info.nameSpan, `'${info.name}' is ${what} and cannot be declared; choose another name`),
-      );
+    // Built-in operations are recognised only where they are called, so `subspace meet = P & Q` is a
+    // fine name; the names of fields are kept free of declarations to avoid `QQ` meaning two things.
+    if (FIELD_NAMES.has(info.name)) {
+      this.problems.push(NAME_PROBLEM('name/reserved', info.nameSpan, `'${info.name}' names a field and cannot be declared; choose another name`));
       return;
     }
     // A basis name may repeat across spaces (e1 of V and of W), never within one space
