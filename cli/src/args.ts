@@ -17,7 +17,7 @@ export type Command =
 export class UsageError extends Error {}
 
 export const USAGE = `Usage:
-  wedgework check FILE... [--results] [--json] [--normalization raw|first-one|primitive]
+  wedgework check FILE... [--results] [--json] [--normalization raw|first-one|primitive|positive]
   wedgework --help
   wedgework --version
 
@@ -29,7 +29,7 @@ Options:
                      FILE:LINE:COLUMN: KIND NAME: SUMMARY
   --json             print one JSON document instead of lines (see docs/cli-json.md)
   --normalization M  how projective points are scaled when the file has no
-                     \`normalize\` statement: raw, first-one or primitive
+                     \`normalize\` statement: raw, first-one, primitive or positive
                      (default: ${DEFAULT_NORMALIZATION})
   --                 treat every later argument as a file name
   -h, --help         print this help
@@ -44,10 +44,10 @@ Exit status: 0 when no error was found, 1 when some file has an error,
 
 function parseNormalization(value: string | undefined): Normalization {
   if (value === undefined || value === '') {
-    throw new UsageError('--normalization needs a value: raw, first-one or primitive');
+    throw new UsageError('--normalization needs a value: raw, first-one, primitive or positive');
   }
   if (!(NORMALIZATIONS as readonly string[]).includes(value)) {
-    throw new UsageError(`unknown normalization '${value}' (choose raw, first-one or primitive)`);
+    throw new UsageError(`unknown normalization '${value}' (choose raw, first-one, primitive or positive)`);
   }
   return value as Normalization;
 }

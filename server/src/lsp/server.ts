@@ -131,7 +131,13 @@ export function startServer(connection: Connection): void {
     // Read the document only now: it may have changed (or closed) while the settings were fetched.
     const entry = documents.get(uri);
     if (!entry) return;
-    const analysis = analyze(entry.document.getText(), { evaluate: true, normalization: settings.normalization });
+    const analysis = analyze(entry.document.getText(), {
+      evaluate: true,
+      normalization: settings.normalization,
+      order: settings.indexOrder,
+      firstLabel: settings.firstLabel,
+      layout: settings.layout,
+    });
     documents.recordEvaluation(entry, analysis);
     publish(entry);
     // The editor asks for lenses when the text changes, not when an evaluation finishes: after a save

@@ -10,12 +10,22 @@ export type EvaluateOn = 'save' | 'type';
 export interface Settings {
   normalization: Normalization;
   evaluateOn: EvaluateOn;
+  /** Workspace defaults for the conventions a file does not choose itself. */
+  indexOrder: 'lex' | 'colex';
+  firstLabel: 0 | 1;
+  layout: 'rows' | 'columns';
 }
 
-export const NORMALIZATIONS: readonly Normalization[] = ['raw', 'first-one', 'primitive'];
+export const NORMALIZATIONS: readonly Normalization[] = ['raw', 'first-one', 'primitive', 'positive'];
 export const EVALUATE_ON: readonly EvaluateOn[] = ['save', 'type'];
 
-export const DEFAULT_SETTINGS: Settings = { normalization: 'primitive', evaluateOn: 'save' };
+export const DEFAULT_SETTINGS: Settings = {
+  normalization: 'primitive',
+  evaluateOn: 'save',
+  indexOrder: 'lex',
+  firstLabel: 1,
+  layout: 'rows',
+};
 
 function pick<T extends string>(value: unknown, allowed: readonly T[], fallback: T): T {
   return typeof value === 'string' && (allowed as readonly string[]).includes(value) ? (value as T) : fallback;
@@ -27,5 +37,8 @@ export function parseSettings(raw: unknown): Settings {
   return {
     normalization: pick(section['normalization'], NORMALIZATIONS, DEFAULT_SETTINGS.normalization),
     evaluateOn: pick(section['evaluateOn'], EVALUATE_ON, DEFAULT_SETTINGS.evaluateOn),
+    indexOrder: pick(section['indexOrder'], ['lex', 'colex'] as const, DEFAULT_SETTINGS.indexOrder),
+    firstLabel: section['firstLabel'] === 0 || section['firstLabel'] === '0' ? 0 : 1,
+    layout: pick(section['layout'], ['rows', 'columns'] as const, DEFAULT_SETTINGS.layout),
   };
 }
