@@ -2,9 +2,9 @@
  * The command line, parsed into what to do. Bad input raises UsageError,
  * which the caller turns into exit status 2.
  */
-import type { Normalization } from '../../server/src/language/index.js';
+import { NORMALIZATIONS, type Normalization } from '../../server/src/language/index.js';
 
-export const NORMALIZATIONS: readonly Normalization[] = ['raw', 'first-one', 'primitive'];
+export { NORMALIZATIONS };
 
 /** The normalization used when neither the command line nor the file chooses one (as in the editor). */
 export const DEFAULT_NORMALIZATION: Normalization = 'primitive';

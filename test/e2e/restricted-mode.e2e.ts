@@ -93,10 +93,10 @@ describe('the extension in Restricted Mode', { timeout: 180_000 }, () => {
     const disabled = await bench.waitForText('the Disabled in Restricted Mode section', sections, [/Disabled in Restricted Mode\s*[1-9]\d*$/i]);
     const limited = await bench.waitForText('the Limited in Restricted Mode section', sections, [/Limited in Restricted Mode\s*\d+$/i]);
     const expectedRows = Number(/(\d+)\s*$/.exec(disabled)![1]) + Number(/(\d+)\s*$/.exec(limited)![1]);
-    await page.waitForFunction(
+    await bench.waitForCondition(
+      `the list holds the ${expectedRows} extensions the sections count`,
       `document.querySelectorAll(${JSON.stringify(EXTENSION_ROW)}).length >= ${expectedRows}`,
-      undefined,
-      { timeout: 30_000, polling: 100 },
+      async () => `rows shown: ${(await bench.texts(EXTENSION_ROW)).join(' | ')}`,
     );
     const listed = await bench.texts(EXTENSION_ROW);
     process.stderr.write(`  · listed as disabled or limited in Restricted Mode: ${listed.map((row) => row.slice(0, 40)).join(' | ')}\n`);

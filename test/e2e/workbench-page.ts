@@ -144,6 +144,15 @@ export class Workbench {
     }
   }
 
+  /** Waits until the browser-side `expression` is true; on timeout, `describe()` says what the page showed. */
+  async waitForCondition(what: string, expression: string, describe: () => Promise<string>, timeout = DEFAULT_WAIT_MS): Promise<void> {
+    try {
+      await this.page.waitForFunction(expression, undefined, { timeout, polling: POLL_MS });
+    } catch {
+      await this.fail(`${what}: not the case within ${timeout / 1000} s (${expression})`, await describe());
+    }
+  }
+
   /** Opens the workbench at `url` and waits for the explorer to list the folder. */
   async open(url: string): Promise<void> {
     await this.page.goto(url);

@@ -10,7 +10,7 @@
 import type { AnyField } from '../engine/fields.js';
 import { forEachSubset, rankLex } from '../engine/subsets.js';
 import type { ConventionStmt, NormalizeStmt, Program } from './ast.js';
-import type { Normalization, Problem } from './types.js';
+import { NORMALIZATIONS, type Normalization, type Problem } from './types.js';
 
 export type IndexOrder = 'lex' | 'colex';
 export type Layout = 'rows' | 'columns';
@@ -47,7 +47,6 @@ export const DEFAULT_CONVENTION: FileConvention = {
   moment: 'pxd',
 };
 
-export const NORMALIZATIONS: readonly Normalization[] = ['raw', 'first-one', 'primitive', 'positive'];
 
 const NORMALIZATION_WORDS: Record<Normalization, string> = {
   raw: 'raw minors (no rescaling)',

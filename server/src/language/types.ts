@@ -37,6 +37,9 @@ export interface RelatedSpan {
 /** How a projective point (a Plücker vector) is scaled for display. */
 export type Normalization = 'raw' | 'first-one' | 'primitive' | 'positive';
 
+/** Every normalization, in the order settings and help texts list them. */
+export const NORMALIZATIONS: readonly Normalization[] = ['raw', 'first-one', 'primitive', 'positive'];
+
 export interface AnalyzeOptions {
   /**
    * `false`: lex, parse and resolve names only (cheap, for every keystroke).

@@ -2,7 +2,7 @@
  * The server's settings (`wedgework.*` in the editor), read defensively: a
  * missing or misspelt value falls back to its default rather than failing.
  */
-import type { Normalization } from '../language/index.js';
+import { NORMALIZATIONS, type Normalization } from '../language/index.js';
 
 /** When the full evaluation runs: on save (and open), or also while typing. */
 export type EvaluateOn = 'save' | 'type';
@@ -16,7 +16,7 @@ export interface Settings {
   layout: 'rows' | 'columns';
 }
 
-export const NORMALIZATIONS: readonly Normalization[] = ['raw', 'first-one', 'primitive', 'positive'];
+export { NORMALIZATIONS };
 export const EVALUATE_ON: readonly EvaluateOn[] = ['save', 'type'];
 
 export const DEFAULT_SETTINGS: Settings = {
