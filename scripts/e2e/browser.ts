@@ -11,7 +11,7 @@ export const VIEWPORT = { width: 1360, height: 860 };
  * first argument of launchPersistentContext, never a --user-data-dir flag). Clipboard access is
  * granted for `origin`, so a test can read what a command copied.
  */
-export async function openBrowser(scratch: string, origin: string): Promise<BrowserContext> {
+export async function openBrowser(scratch: string, origin: string, viewport = VIEWPORT): Promise<BrowserContext> {
   const profileDir = join(scratch, 'browser-profile');
   mkdirSync(profileDir, { recursive: true });
   const context = await chromium.launchPersistentContext(profileDir, {
@@ -19,7 +19,7 @@ export async function openBrowser(scratch: string, origin: string): Promise<Brow
     headless: true,
     args: CHROMIUM_ARGS,
     env: isolatedEnv(join(scratch, 'browser')) as Record<string, string>,
-    viewport: VIEWPORT,
+    viewport,
     deviceScaleFactor: 1,
   });
   await context.grantPermissions(['clipboard-read', 'clipboard-write'], { origin });

@@ -22,7 +22,9 @@ import * as facts from './sample-facts.js';
 import { timed } from './timed.js';
 
 const EXTENSIONS_SEARCH = '.extensions-viewlet .suggest-input-container';
-const EXTENSION_ROW = '.extensions-viewlet .monaco-list-row';
+const EXTENSION_ROW = '.extensions-viewlet .monaco-list-row:has(.extension-list-item)';
+/** Tall enough that both Restricted Mode sections of the Extensions view show every row they count. */
+const TALL_VIEWPORT = { width: 1360, height: 1700 };
 
 describe('the extension in Restricted Mode', { timeout: 180_000 }, () => {
   const scratch = mkdtempSync(join(tmpdir(), 'wedgework-e2e-restricted-'));
@@ -38,7 +40,7 @@ describe('the extension in Restricted Mode', { timeout: 180_000 }, () => {
     const workspace = makeWorkspace(scratch);
     const profile = await timed('install the .vsix', () => prepareProfile(scratch, { vsix: VSIX }));
     server = await timed('start code-server with workspace trust', () => startCodeServer(profile, { workspaceTrust: true }));
-    browser = await timed('start chromium', () => openBrowser(scratch, server!.origin));
+    browser = await timed('start chromium', () => openBrowser(scratch, server!.origin, TALL_VIEWPORT));
     page = browser.pages()[0] ?? (await browser.newPage());
     bench = new Workbench(page, artifacts);
     await timed('load the workbench', () => bench.open(server!.url(workspace)));
@@ -111,5 +113,7 @@ describe('the extension in Restricted Mode', { timeout: 180_000 }, () => {
     await page.locator(EXTENSIONS_SEARCH).click();
     await page.keyboard.press('Control+A');
     await page.keyboard.type(query);
+    // Close the search box's suggestions, which would cover the list.
+    await page.keyboard.press('Escape');
   }
 });

@@ -290,6 +290,26 @@ describe('lines in projective 3-space', () => {
   });
 });
 
+describe('more line geometry', () => {
+  test('the line where two planes meet, a line from direction and moment, and the Klein quadric', () => {
+    // The planes x4 = 0 and x3 = 0 meet in the line span(e1, e2) (hand computation). The direction–moment
+    // pair (3, 4, 5; −2, 4, −2) is the line through A = (1, 2, 3) and B = (4, 6, 8): d = B − A, m = A × d
+    // (common practice, no source). The Klein quadric p12·p34 − p13·p24 + p14·p23 = 0 holds exactly on lines
+    // (classical; Plücker's relation for G(2,4) — from memory).
+    expectAnalysis(`
+      space P dim 4
+      subspace L = line_of_planes((0, 0, 0, 1), (0, 0, 1, 0))
+      claim L = span(e1, e2)
+      subspace M = line_from_direction_moment(3, 4, 5, -2, 4, -2)
+      claim M = span((1, 1, 2, 3), (1, 4, 6, 8))
+      claim plucker(M) is on klein quadric
+      claim {12: 1, 34: 1} is not on klein quadric
+      subspace N = line_from_direction_moment(1, 0, 0, 1, 0, 0)
+      #            ^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^ math/not-a-line
+    `);
+  });
+});
+
 describe('finite fields for subspace codes', () => {
   test('GF(4) with generator w: w² = w + 1, w³ = 1, and the defining polynomial is stated', () => {
     // GF(4) = GF(2)[x]/(x² + x + 1), the only irreducible quadratic over GF(2) (common practice, no source).

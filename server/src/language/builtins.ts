@@ -26,6 +26,8 @@ export const BUILTINS: readonly Builtin[] = [
   { name: 'shift', signature: 'shift(W)', summary: 'the cyclic shift of columns with the twist (−1)^(k−1) on the wrapped column' },
   { name: 'pairing', signature: 'pairing(L1, L2)', summary: 'the Klein pairing of two lines of projective 3-space: 0 exactly when they meet' },
   { name: 'meet', signature: 'meet(L1, L2)', summary: 'whether two lines meet, are parallel or skew, with their common point and plane' },
+  { name: 'line_of_planes', signature: 'line_of_planes(u, v)', summary: 'the line where two planes of projective 3-space meet (planes by their coefficients)' },
+  { name: 'line_from_direction_moment', signature: 'line_from_direction_moment(a1, …, a6)', summary: 'the line with the given six direction–moment numbers, in the file\'s convention' },
   { name: 'direction_moment', signature: 'direction_moment(L)', summary: 'a line of projective 3-space as direction and moment' },
   { name: 'count', signature: 'count(k, V)', summary: 'the number of k-dimensional subspaces of V over a finite field (a Gaussian binomial)' },
   { name: 'subspaces', signature: 'subspaces(k, V)', summary: 'every k-dimensional subspace of V over a finite field, for small cases' },

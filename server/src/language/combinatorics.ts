@@ -4,8 +4,9 @@
  */
 import { matroidOfPlucker, rankOfColumns } from '../engine/matroid.js';
 import { cyclicShift, positivityOf } from '../engine/positivity.js';
-import { describeDirectionMoment, directionMoment, kleinPairing, lineMeet, type DirectionMomentOptions } from '../engine/lines-p3.js';
-import { toDense } from '../engine/multivector.js';
+import { describeDirectionMoment, directionMoment, fromDirectionMoment, kleinPairing, lineMeet, lineOfPlanes, onKleinQuadric, type DirectionMomentOptions } from '../engine/lines-p3.js';
+import { decompose } from '../engine/decompose.js';
+import { fromDense, toDense } from '../engine/multivector.js';
 import { binomialBig, unrankLex } from '../engine/subsets.js';
 import { EnumerationLimitError, enumerateSubspaces, gaussianBinomial } from '../engine/grassmannian.js';
 import { finiteFieldOrder } from '../engine/finite-fields.js';
@@ -124,6 +125,38 @@ export function callCombinatorics(env: Environment, e: Call, evaluate: Evaluate)
       const dm = directionMoment(F, toDense(F, subspacePlucker(env, l)), options);
       return { t: 'direction-moment', direction: dm.direction, moment: dm.moment, coordinates: dm.coordinates, description: relabel(env, describeDirectionMoment(options)) };
     }
+    case 'line_of_planes': {
+      arity(2, 'line_of_planes(u, v)');
+      // Planes are given by their coefficient vectors (u1 x1 + … + u4 x4 = 0), as vectors of a 4-space.
+      const [u, v] = [0, 1].map((i) => {
+        const value = arg(i);
+        if (value.t !== 'vector' || value.space.dim !== 4) fail('type/operand', e.args[i]!.span, `a plane of projective 3-space is given by 4 coefficients (a vector of a 4-dimensional space), found ${describeValue(value)}`);
+        return value;
+      });
+      const line = lineOfPlanes(F, u!.coords, v!.coords);
+      if (line.rows.length !== 2) fail('math/same-plane', e.span, 'the two planes are the same (or one is zero): they meet in a plane, not a line');
+      const ech = rref(F, line.rows, 4);
+      return { t: 'subspace', space: u!.space, basis: ech.rows, pivots: ech.pivots, note: 'The line where the two planes meet: the common solutions of both plane equations.' };
+    }
+    case 'line_from_direction_moment': {
+      if (e.args.length !== 6) fail('type/arguments', e.span, 'line_from_direction_moment takes the six numbers of the line, in the order of the file\'s convention');
+      const six = e.args.map((a, i) => {
+        const value = arg(i);
+        if (value.t !== 'scalar') fail('type/operand', a.span, `expected a number, found ${describeValue(value)}`);
+        return value.value;
+      });
+      const options = lineOptions(env);
+      const p = fromDirectionMoment(F, six, options);
+      if (!onKleinQuadric(F, p)) {
+        fail('math/not-a-line', e.span, 'these six numbers are no line: the direction is not orthogonal to the moment (d·m ≠ 0), so the point is off the Klein quadric');
+      }
+      if (p.every((x) => F.isZero(x))) fail('math/not-a-line', e.span, 'all six numbers are zero: that is no line');
+      const space = [...env.spaces.values()].find((s) => s.dim === 4 && !s.derived);
+      if (!space) fail('type/no-space', e.span, 'a line of projective 3-space lives in a 4-dimensional space: declare one, e.g. `space P dim 4`');
+      const d = decompose(F, fromDense(F, 4, 2, p));
+      if (d.kind !== 'decomposable') fail('math/not-a-line', e.span, 'these six numbers are no line');
+      return { t: 'subspace', space, basis: d.basis, pivots: d.basis.map((r) => r.findIndex((x) => !F.isZero(x))), note: relabel(env, describeDirectionMoment(options)) };
+    }
     case 'count': {
       arity(2, 'count(k, V)');
       const [k, space] = degreeAndSpace(env, e, evaluate);
@@ -226,7 +259,19 @@ export function propertyHolds(env: Environment, subject: Value, property: string
           : `${m.bases.length} of the ${total} column sets are bases over ${m.field}`,
       };
     }
+    case 'on-klein-quadric': {
+      const mv = subject.t === 'multivector' ? subject : undefined;
+      if (!mv || mv.mv.k !== 2 || mv.space.dim !== 4) fail('type/operand', span, `the Klein quadric lies in the second exterior power of a 4-dimensional space; found ${describeValue(subject)}`);
+      const p = toDense(env.F, mv.mv);
+      const n = 4;
+      const name = (s: number[]) => env.labels.name(s, n);
+      const value = env.F.add(env.F.sub(env.F.mul(p[0], p[5]), env.F.mul(p[1], p[4])), env.F.mul(p[2], p[3]));
+      return {
+        holds: env.F.isZero(value),
+        found: `${name([0, 1])}·${name([2, 3])} − ${name([0, 2])}·${name([1, 3])} + ${name([0, 3])}·${name([1, 2])} = ${env.F.format(value)}`,
+      };
+    }
     default:
-      fail('type/unknown-property', span, `unknown property '${property.replace(/-/g, ' ')}': the properties are totally nonnegative, totally positive, uniform and decomposable`);
+      fail('type/unknown-property', span, `unknown property '${property.replace(/-/g, ' ')}': the properties are totally nonnegative, totally positive, uniform, decomposable and on klein quadric`);
   }
 }
