@@ -52,14 +52,20 @@ function profileArgs(profile: Profile): string[] {
 /**
  * Prepares a code-server profile under `scratch`: user settings, an empty config file, an extensions
  * folder, and (when `vsix` is given) the extension installed from its package, as a user would.
+ * The user-data and extensions folders may be given (a test runner's --user-data-dir, --extensions-dir).
  */
 export function prepareProfile(
   scratch: string,
-  { vsix, settings = {} }: { vsix?: string; settings?: Record<string, unknown> } = {},
+  {
+    vsix,
+    settings = {},
+    userDataDir = join(scratch, 'user-data'),
+    extensionsDir = join(scratch, 'extensions'),
+  }: { vsix?: string; settings?: Record<string, unknown>; userDataDir?: string; extensionsDir?: string } = {},
 ): Profile {
   const profile: Profile = {
-    userDataDir: join(scratch, 'user-data'),
-    extensionsDir: join(scratch, 'extensions'),
+    userDataDir,
+    extensionsDir,
     config: join(scratch, 'code-server.yaml'),
     env: isolatedEnv(scratch, { EXTENSIONS_GALLERY: '{}' }),
     scratch,

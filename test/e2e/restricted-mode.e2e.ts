@@ -101,7 +101,6 @@ describe('the extension in Restricted Mode', { timeout: 180_000 }, () => {
       async () => `rows shown: ${(await bench.texts(EXTENSION_ROW)).join(' | ')}`,
     );
     const listed = await bench.texts(EXTENSION_ROW);
-    process.stderr.write(`  · listed as disabled or limited in Restricted Mode: ${listed.map((row) => row.slice(0, 40)).join(' | ')}\n`);
     assert.ok(
       !listed.some((row) => row.includes(manifest.displayName)),
       `the extension is listed as disabled or limited in Restricted Mode:\n${listed.join('\n')}`,

@@ -3,7 +3,7 @@
  * claim becomes an error that says what was claimed, what was found, and why.
  */
 import { coordinatesIn, rref } from '../engine/matrix.js';
-import { equalsMV, fromVector, isZeroMV, toDense } from '../engine/multivector.js';
+import { equalsMV, isZeroMV, toDense } from '../engine/multivector.js';
 import { projectivelyEqual } from '../engine/normalize.js';
 import { displayPoint, toLexOrder } from './coordinates.js';
 import { binomialBig } from '../engine/subsets.js';
@@ -11,11 +11,12 @@ import type { ClaimStmt } from './ast.js';
 import { decompositionOf, describeRelation, relationLatex } from './decomposition.js';
 import { subspacePlucker, type Environment } from './environment.js';
 import { checkCoordinateLimit, evaluate } from './expressions.js';
+import { asMultivector } from './arguments.js';
 import { propertyHolds } from './combinatorics.js';
 import { fail } from './failure.js';
 import { matrixLatex } from './latex.js';
 import { formatCombination, formatMatrixInline, formatMultivector, formatPoint, formatTuple } from './text.js';
-import { describeValue, type MultivectorValue, type Scalar, type SubspaceValue, type Value } from './values.js';
+import { describeValue, type Scalar, type SubspaceValue, type Value } from './values.js';
 
 export interface ClaimOutcome {
   holds: boolean;
@@ -51,12 +52,6 @@ export function checkClaim(env: Environment, source: string, s: ClaimStmt): Clai
   return equalityClaim(env, subject, other, subjectText, otherText, claimed, op === '=', s);
 }
 
-function asMultivectorValue(env: Environment, v: Value): MultivectorValue | undefined {
-  if (v.t === 'multivector') return v;
-  if (v.t === 'vector') return { t: 'multivector', space: v.space, mv: fromVector(env.F, v.coords) };
-  return undefined;
-}
-
 function decomposableClaim(
   env: Environment,
   subject: Value,
@@ -65,7 +60,7 @@ function decomposableClaim(
   wanted: boolean,
   s: ClaimStmt,
 ): ClaimOutcome {
-  const mv = asMultivectorValue(env, subject);
+  const mv = asMultivector(env, subject);
   if (!mv) fail('type/operand', s.subject.span, `only a multivector can be decomposable; ${text} is ${describeValue(subject)}`);
   const n = mv.space.dim;
   const code = wanted ? 'claim/decomposable' : 'claim/not-decomposable';
@@ -239,14 +234,14 @@ function equalityClaim(
     if (!F.isZero(zeroSide.value)) {
       fail('type/operand', s.relation.span, `${describeValue(thing)} can be compared with 0, not with another scalar`);
     }
-    const mv = asMultivectorValue(env, thing)!;
+    const mv = asMultivector(env, thing)!;
     const zero = isZeroMV(mv.mv);
     const thingText = other.t === 'scalar' ? subjectText : otherText;
     return verdict(zero, zero ? `${thingText} is zero` : `${thingText} = ${formatMultivector(F, mv.mv, mv.space.basisNames)} is not zero`);
   }
 
-  const a = asMultivectorValue(env, subject);
-  const b = asMultivectorValue(env, other);
+  const a = asMultivector(env, subject);
+  const b = asMultivector(env, other);
   if (a && b && a.space.name === b.space.name && a.mv.k === b.mv.k && (a.pluckerOf || b.pluckerOf)) {
     // A Plücker vector is a projective point: compare up to a nonzero scalar.
     const equal = projectivelyEqual(F, toDense(F, a.mv), toDense(F, b.mv));

@@ -14,6 +14,7 @@ import { minimumDistance, subspaceDistance } from '../engine/subspace-codes.js';
 import { rref } from '../engine/matrix.js';
 import type { Call } from './ast.js';
 import { subspacePlucker, type Environment } from './environment.js';
+import { readIndexSet } from './arguments.js';
 import { checkCoordinateLimit } from './expressions.js';
 import { fail } from './failure.js';
 import type { Evaluate } from './geometry.js';
@@ -78,7 +79,7 @@ export function callCombinatorics(env: Environment, e: Call, evaluate: Evaluate)
     case 'rank': {
       arity(2, 'rank(W, I)');
       const w = subspaceArg(arg(0), e.args[0]!.span, 'rank');
-      const columns = columnSet(env, e.args[1]!, w.space.dim);
+      const columns = readIndexSet(env, e.args[1]!, w.space);
       return { t: 'integer', value: rankOfColumns(F, w.basis, columns) };
     }
     case 'shift': {
@@ -211,19 +212,6 @@ function degreeAndSpace(env: Environment, e: Call, evaluate: Evaluate): [number,
   const k = Number(kArg.text);
   if (k > v.space.dim) fail('type/operand', kArg.span, `k = ${k} is above dim ${v.space.name} = ${v.space.dim}`);
   return [k, v.space];
-}
-
-/** `13` or `(1, 3)` as 0-based columns of an n-space. */
-function columnSet(env: Environment, arg: Call['args'][number], n: number): number[] {
-  const singleDigits = n - 1 + env.convention.firstLabel <= 9;
-  let labels: number[];
-  if (arg.type === 'number' && /^\d+$/.test(arg.text)) labels = singleDigits ? [...arg.text].map(Number) : [Number(arg.text)];
-  else if (arg.type === 'tuple' && arg.items.every((x) => x.type === 'number' && /^\d+$/.test(x.text))) labels = arg.items.map((x) => Number((x as { text: string }).text));
-  else fail('type/index-set', arg.span, 'expected a set of columns such as 13 or (1, 3)');
-  const positions = labels.map((l) => l - env.convention.firstLabel);
-  if (positions.some((p) => p < 0 || p >= n)) fail('type/bad-label', arg.span, `a column label is outside ${env.labels.position(0)}…${env.labels.position(n - 1)}`);
-  if (new Set(positions).size !== positions.length) fail('type/repeated-label', arg.span, 'the column set repeats a label');
-  return positions;
 }
 
 /** `claim W is totally nonnegative` and the other property claims. */

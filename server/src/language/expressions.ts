@@ -8,7 +8,6 @@ import { findDependency, intersectRowSpaces, kernel, rref, sumRowSpaces } from '
 import {
   add as addMV,
   fromTerms,
-  fromVector,
   isZeroMV,
   neg as negMV,
   scale as scaleMV,
@@ -34,6 +33,7 @@ import type {
   Tuple,
 } from './ast.js';
 import { basisCandidates, subspacePlucker, type Environment } from './environment.js';
+import { arity, asMultivector, readIndexSet, subspaceOf } from './arguments.js';
 import { fail, Poisoned } from './failure.js';
 import { decompositionOf, describeRelation } from './decomposition.js';
 import { applyMap, callGeometry } from './geometry.js';
@@ -137,13 +137,6 @@ function lookup(env: Environment, e: NameRef): Value {
 function basisVector(env: Environment, space: SpaceInfo, index: number): VectorValue {
   const coords = Array.from({ length: space.dim }, (_, i) => (i === index ? env.F.one : env.F.zero));
   return { t: 'vector', space, coords };
-}
-
-/** A vector as a degree-1 multivector, so that sums and wedges mix the two freely. */
-function asMultivector(env: Environment, v: Value): MultivectorValue | undefined {
-  if (v.t === 'multivector') return v;
-  if (v.t === 'vector') return { t: 'multivector', space: v.space, mv: fromVector(env.F, v.coords) };
-  return undefined;
 }
 
 function sameSpace(a: SpaceInfo, b: SpaceInfo, span: Span, what: string): void {
@@ -280,14 +273,6 @@ function power(env: Environment, base: Scalar, exponent: bigint): Scalar {
   return result;
 }
 
-/** The subspace spanned by `rows`, reduced; `given` keeps the user's rows when they are independent. */
-export function subspaceOf(env: Environment, space: SpaceInfo, rows: Scalar[][], given?: Scalar[][]): SubspaceValue {
-  const ech = rref(env.F, rows, space.dim);
-  const value: SubspaceValue = { t: 'subspace', space, basis: ech.rows, pivots: ech.pivots };
-  if (given && given.length === ech.rank) value.given = given;
-  return value;
-}
-
 /** The space a literal lives in: `in V`, else the only declared space (of the right dimension, if known). */
 function contextSpace(env: Environment, ctx: ExprContext, span: Span, width: number | undefined, what: string): SpaceInfo {
   if (ctx.space) {
@@ -392,7 +377,7 @@ function spanCall(env: Environment, e: Call, ctx: ExprContext): SubspaceValue {
     return bound ? [{ span: bound.declSpan, message: `${arg.name.name} is declared here` }] : [];
   });
   reportDependency(env, 'math/degenerate-span', rows, names, e.args.map((a) => a.span), related, e.span, 'this list of vectors');
-  return subspaceOf(env, space, rows, rows);
+  return subspaceOf(env, space, rows, { given: rows });
 }
 
 function denseVector(env: Environment, mv: Multivector<Scalar>, space: SpaceInfo): Scalar[] {
@@ -407,7 +392,7 @@ function rowsSubspace(env: Environment, e: RowsExpr, ctx: ExprContext): Subspace
   const rowSpans = e.matrix.rows.map((r) => ({ start: r[0]!.span.start, end: r[r.length - 1]!.span.end }));
   const names = m.rows.map((_, i) => `row ${i + 1}`);
   reportDependency(env, 'math/degenerate-rows', m.rows, names, rowSpans, [], e.span, 'this basis matrix');
-  return subspaceOf(env, space, m.rows, m.rows);
+  return subspaceOf(env, space, m.rows, { given: m.rows });
 }
 
 /** `columns [ … ]`: an n×k matrix whose columns are the basis vectors (the layout of much engineering work). */
@@ -417,7 +402,7 @@ function columnsSubspace(env: Environment, e: ColumnsExpr, ctx: ExprContext): Su
   const vectors = Array.from({ length: m.ncols }, (_, j) => m.rows.map((r) => r[j]));
   const names = vectors.map((_, j) => `column ${j + 1}`);
   reportDependency(env, 'math/degenerate-rows', vectors, names, [], [], e.span, 'this basis matrix');
-  return subspaceOf(env, space, vectors, vectors);
+  return subspaceOf(env, space, vectors, { given: vectors });
 }
 
 function solutionsSubspace(env: Environment, e: SolutionsExpr, ctx: ExprContext): SubspaceValue {
@@ -442,7 +427,7 @@ function indexMap(env: Environment, e: IndexMapLit, ctx: ExprContext): Multivect
     const positions = labels.map((l) => l - env.convention.firstLabel);
     const bad = positions.findIndex((p) => p < 0 || p >= n);
     if (bad >= 0) {
-      fail('type/bad-label', x.key.span, `label ${labels[bad]} is outside ${labelRange(env, space)} (the labels of ${space.name}, dimension ${n})`);
+      fail('type/bad-label', x.key.span, `label ${labels[bad]} is outside ${env.labels.position(0)}…${env.labels.position(n - 1)} (the labels of ${space.name}, dimension ${n})`);
     }
     if (new Set(positions).size !== positions.length) {
       fail('type/repeated-label', x.key.span, `index set ${labels.join('')} repeats a label; a wedge with a repeated vector is zero, so leave it out`);
@@ -460,44 +445,10 @@ function dimension(env: Environment, e: DimExpr, ctx: ExprContext): Value {
   fail('type/operand', e.operand.span, `dim applies to a subspace or a space, found ${describeValue(v)}`);
 }
 
-function labelRange(env: Environment, space: SpaceInfo): string {
-  return `${env.labels.position(0)}…${env.labels.position(space.dim - 1)}`;
-}
-
-/** Reads an index set argument: `13` (one digit a label) or `(1, 3)`. */
-function indexSetArgument(env: Environment, arg: Expr, space: SpaceInfo, k: number): number[] {
-  let labels: number[];
-  const singleDigits = space.dim - 1 + env.convention.firstLabel <= 9;
-  if (arg.type === 'number' && /^\d+$/.test(arg.text)) {
-    labels = singleDigits ? [...arg.text].map(Number) : [Number(arg.text)];
-    if (!singleDigits && k > 1) {
-      fail('type/index-set', arg.span, `with labels above 9 write the index set as a list, e.g. (1, 10)`);
-    }
-  } else if (arg.type === 'tuple' && arg.items.every((x) => x.type === 'number' && /^\d+$/.test(x.text))) {
-    labels = arg.items.map((x) => Number((x as { text: string }).text));
-  } else {
-    fail('type/index-set', arg.span, 'expected an index set such as 13 or (1, 3)');
-  }
-  if (labels.length !== k) {
-    fail('type/index-set', arg.span, `the index set has ${labels.length} labels, but the subspace has dimension ${k}`);
-  }
-  const positions = labels.map((l) => l - env.convention.firstLabel);
-  const bad = positions.findIndex((p) => p < 0 || p >= space.dim);
-  if (bad >= 0) fail('type/bad-label', arg.span, `label ${labels[bad]} is outside ${labelRange(env, space)}`);
-  if (new Set(positions).size !== positions.length) fail('type/repeated-label', arg.span, 'the index set repeats a label');
-  return positions;
-}
-
 function expectSubspace(env: Environment, arg: Expr, ctx: ExprContext, what: string): SubspaceValue {
   const v = evaluate(env, arg, ctx);
   if (v.t !== 'subspace') fail('type/operand', arg.span, `${what} takes a subspace, found ${describeValue(v)}`);
   return v;
-}
-
-function arity(e: Call, n: number, signature: string): void {
-  if (e.args.length !== n) {
-    fail('type/arguments', e.span, `${signature} takes ${n} argument${n === 1 ? '' : 's'}, found ${e.args.length}`);
-  }
 }
 
 /** Guards against computing more Plücker coordinates than the limit allows. */
@@ -547,7 +498,7 @@ function call(env: Environment, e: Call, ctx: ExprContext): Value {
     case 'chart': {
       arity(e, 2, 'chart(W, I)');
       const w = expectSubspace(env, e.args[0]!, ctx, 'chart');
-      const columns = indexSetArgument(env, e.args[1]!, w.space, w.basis.length);
+      const columns = readIndexSet(env, e.args[1]!, w.space, w.basis.length);
       const c = chartCoordinates(env.F, w.basis, w.space.dim, columns);
       if (!c.ok) {
         const sorted = columns.slice().sort((a, b) => a - b);

@@ -7,25 +7,24 @@
 import { annihilator, annihilatorPlucker, COMPLEMENT_SIGN_RULE, hodgeStar, HODGE_SIGN_RULE, quotientBasis } from '../engine/duality.js';
 import { oppositeFlag, standardFlag, checkFlag, InvalidFlagError } from '../engine/flags.js';
 import { changeOfBasis, compoundMatrix, imageOf, kernelOf, mapPlucker, NotInvertibleError, preimageOf } from '../engine/linear-map.js';
-import { fromDense, fromVector, toDense } from '../engine/multivector.js';
+import { fromDense, toDense } from '../engine/multivector.js';
 import { schubertCell, schubertConditions } from '../engine/schubert.js';
 import { binomialBig } from '../engine/subsets.js';
 import type { Call, Expr } from './ast.js';
 import { subspacePlucker, type Environment } from './environment.js';
+import { arity, asMultivector, subspaceOf } from './arguments.js';
 import { fail } from './failure.js';
 import type { Span } from './types.js';
 import {
   describeValue,
   type FlagValue,
   type MapValue,
-  type MultivectorValue,
   type SchubertValue,
   type SpaceInfo,
   type SubspaceValue,
   type Value,
   type VectorValue,
 } from './values.js';
-import { rref } from '../engine/matrix.js';
 
 export type Evaluate = (e: Expr) => Value;
 
@@ -34,20 +33,9 @@ export const GEOMETRY_BUILTINS = [
   'standard', 'opposite', 'schubert',
 ] as const;
 
-function arity(e: Call, n: number, signature: string): void {
-  if (e.args.length !== n) {
-    fail('type/arguments', e.span, `${signature} takes ${n} argument${n === 1 ? '' : 's'}, found ${e.args.length}`);
-  }
-}
-
 function expect<T extends Value['t']>(v: Value, t: T, span: Span, what: string): Extract<Value, { t: T }> {
   if (v.t !== t) fail('type/operand', span, `${what}, found ${describeValue(v)}`);
   return v as Extract<Value, { t: T }>;
-}
-
-function subspaceOfRows(env: Environment, space: SpaceInfo, rows: unknown[][], note?: string): SubspaceValue {
-  const ech = rref(env.F, rows, space.dim);
-  return { t: 'subspace', space, basis: ech.rows, pivots: ech.pivots, ...(note ? { note } : {}) };
 }
 
 /** The dual space V* with the dual basis e1* … en*, created once per space. */
@@ -68,12 +56,6 @@ export function dualSpace(env: Environment, space: SpaceInfo): SpaceInfo {
   return dual;
 }
 
-function asMultivector(env: Environment, v: Value): MultivectorValue | undefined {
-  if (v.t === 'multivector') return v;
-  if (v.t === 'vector') return { t: 'multivector', space: v.space, mv: fromVector(env.F, v.coords) };
-  return undefined;
-}
-
 /** f applied to a vector, a subspace or a multivector (through the induced map on the exterior power). */
 export function applyMap(env: Environment, f: MapValue, arg: Value, span: Span): Value {
   const F = env.F;
@@ -84,7 +66,7 @@ export function applyMap(env: Environment, f: MapValue, arg: Value, span: Span):
   }
   if (arg.t === 'subspace') {
     if (arg.space.name !== f.from.name) fail('type/space-mismatch', span, `${f.name} maps ${f.from.name}, but this is a subspace of ${arg.space.name}`);
-    return subspaceOfRows(env, f.to, imageOf(F, f.matrix, arg.basis, f.to.dim));
+    return subspaceOf(env, f.to, imageOf(F, f.matrix, arg.basis, f.to.dim));
   }
   const mv = asMultivector(env, arg);
   if (mv) {
@@ -157,7 +139,7 @@ export function callGeometry(env: Environment, e: Call, evaluate: Evaluate): Val
         const byRule = annihilatorPlucker(F, toDense(F, subspacePlucker(env, w)), n, k);
         note += ` Applied to this subspace's Plücker vector it gives ${byRule.length <= 12 ? `[${byRule.map((x) => F.format(x)).join(' : ')}]` : `${byRule.length} coordinates`}, the annihilator's Plücker vector up to a nonzero factor.`;
       }
-      return subspaceOfRows(env, dual, annihilator(F, w.basis, n), note);
+      return subspaceOf(env, dual, annihilator(F, w.basis, n), { note });
     }
     case 'complement': {
       arity(e, 1, 'complement(ω)');
@@ -177,19 +159,19 @@ export function callGeometry(env: Environment, e: Call, evaluate: Evaluate): Val
     case 'kernel': {
       arity(e, 1, 'kernel(f)');
       const f = expect(arg(0), 'map', e.args[0]!.span, 'kernel takes a map');
-      return subspaceOfRows(env, f.from, kernelOf(F, f.matrix, f.to.dim));
+      return subspaceOf(env, f.from, kernelOf(F, f.matrix, f.to.dim));
     }
     case 'image': {
       arity(e, 1, 'image(f)');
       const f = expect(arg(0), 'map', e.args[0]!.span, 'image takes a map');
-      return subspaceOfRows(env, f.to, f.matrix.length ? imageOf(F, f.matrix, f.matrix.map((_, i) => f.matrix.map((__, j) => (i === j ? F.one : F.zero))), f.to.dim) : []);
+      return subspaceOf(env, f.to, f.matrix.length ? imageOf(F, f.matrix, f.matrix.map((_, i) => f.matrix.map((__, j) => (i === j ? F.one : F.zero))), f.to.dim) : []);
     }
     case 'preimage': {
       arity(e, 2, 'preimage(f, W)');
       const f = expect(arg(0), 'map', e.args[0]!.span, 'preimage takes a map first');
       const w = expect(arg(1), 'subspace', e.args[1]!.span, 'preimage takes a subspace second');
       if (w.space.name !== f.to.name) fail('type/space-mismatch', e.args[1]!.span, `${f.name} maps into ${f.to.name}, but this is a subspace of ${w.space.name}`);
-      return subspaceOfRows(env, f.from, preimageOf(F, f.matrix, w.basis, f.to.dim));
+      return subspaceOf(env, f.from, preimageOf(F, f.matrix, w.basis, f.to.dim));
     }
     case 'compound': {
       arity(e, 2, 'compound(f, k)');
