@@ -1,4 +1,4 @@
-// Bundles the three programs to CommonJS with esbuild.
+// Bundles the programs (server and its evaluation worker, client, command line) to CommonJS with esbuild.
 //
 // Why bundle at all: VS Code starts the language server with its own embedded
 // Node, which must not depend on the build machine's node_modules layout, and
@@ -18,6 +18,8 @@ const options = {
   absWorkingDir: root,
   entryPoints: {
     server: 'server/src/lsp/main.ts',
+    // The server runs full evaluations on worker threads started from this file (beside server.cjs).
+    'evaluation-worker': 'server/src/lsp/evaluation-worker.ts',
     client: 'client/src/extension.ts',
     cli: 'cli/src/main.ts',
   },
@@ -40,5 +42,5 @@ if (process.argv.includes('--watch')) {
 } else {
   const started = Date.now();
   await esbuild.build(options);
-  console.log(`esbuild: dist/server.cjs, dist/client.cjs, dist/cli.cjs built in ${Date.now() - started} ms`);
+  console.log(`esbuild: dist/server.cjs, dist/evaluation-worker.cjs, dist/client.cjs, dist/cli.cjs built in ${Date.now() - started} ms`);
 }

@@ -2,6 +2,7 @@
  * The command line, parsed into what to do. Bad input raises UsageError,
  * which the caller turns into exit status 2.
  */
+import { resolve } from 'node:path';
 import { NORMALIZATIONS, type Normalization } from '../../server/src/language/index.js';
 
 export { NORMALIZATIONS };
@@ -12,17 +13,18 @@ export const DEFAULT_NORMALIZATION: Normalization = 'primitive';
 export type Command =
   | { kind: 'help' }
   | { kind: 'version' }
-  | { kind: 'check'; files: string[]; json: boolean; results: boolean; normalization: Normalization };
+  | { kind: 'check'; files: string[]; json: boolean; results: boolean; normalization: Normalization; latex?: string };
 
 export class UsageError extends Error {}
 
 export const USAGE = `Usage:
   wedgework check FILE... [--results] [--json] [--normalization raw|first-one|primitive|positive]
+                           [--latex OUT.tex]
   wedgework --help
   wedgework --version
 
 Checks .wedge files: parses them, evaluates every statement and checks every
-claim. Files are only read, never written.
+claim. The .wedge files are only read, never written.
 
 Options:
   --results          also print every result (declarations, claims, shows) as
@@ -31,6 +33,9 @@ Options:
   --normalization M  how projective points are scaled when the file has no
                      \`normalize\` statement: raw, first-one, primitive or positive
                      (default: ${DEFAULT_NORMALIZATION})
+  --latex OUT.tex    also write every result of every file to OUT.tex, a LaTeX
+                     fragment for \\input (amsmath, amssymb); OUT.tex must not
+                     be one of the input files nor any .wedge file
   --                 treat every later argument as a file name
   -h, --help         print this help
   -v, --version      print the version
@@ -52,6 +57,18 @@ function parseNormalization(value: string | undefined): Normalization {
   return value as Normalization;
 }
 
+/** The file `--latex` writes: any name but a `.wedge` one (those are only ever read). */
+function parseLatexTarget(value: string | undefined): string {
+  if (value === undefined || value === '' || value.startsWith('-')) throw new UsageError('--latex needs the name of the .tex file to write');
+  if (/\.wedge$/i.test(value)) throw new UsageError(`--latex ${value}: will not write LaTeX into a .wedge file; name a .tex file`);
+  return value;
+}
+
+/** Whether two names on the command line name one file (same path once resolved; links are checked when writing). */
+function sameName(a: string, b: string): boolean {
+  return resolve(a) === resolve(b);
+}
+
 export function parseArgs(args: readonly string[]): Command {
   if (args.length === 0) throw new UsageError('no command given');
   const [command, ...rest] = args;
@@ -65,6 +82,7 @@ export function parseArgs(args: readonly string[]): Command {
   let json = false;
   let results = false;
   let normalization = DEFAULT_NORMALIZATION;
+  let latex: string | undefined;
   let optionsEnded = false;
   for (let i = 0; i < rest.length; i++) {
     const arg = rest[i]!;
@@ -82,10 +100,18 @@ export function parseArgs(args: readonly string[]): Command {
       normalization = parseNormalization(rest[++i]);
     } else if (arg.startsWith('--normalization=')) {
       normalization = parseNormalization(arg.slice('--normalization='.length));
+    } else if (arg === '--latex') {
+      latex = parseLatexTarget(rest[++i]);
+    } else if (arg.startsWith('--latex=')) {
+      latex = parseLatexTarget(arg.slice('--latex='.length));
     } else {
       throw new UsageError(`unknown option '${arg}'`);
     }
   }
   if (files.length === 0) throw new UsageError('check needs at least one FILE');
-  return { kind: 'check', files, json, results, normalization };
+  if (latex !== undefined) {
+    const clash = files.find((f) => sameName(f, latex!));
+    if (clash !== undefined) throw new UsageError(`--latex ${latex} is one of the input files: the LaTeX goes to a file of its own, never over an input`);
+  }
+  return { kind: 'check', files, json, results, normalization, ...(latex !== undefined ? { latex } : {}) };
 }

@@ -4,10 +4,13 @@
  */
 import * as vscode from 'vscode';
 import { LanguageClient, TransportKind, type LanguageClientOptions, type ServerOptions } from 'vscode-languageclient/node';
+import { registerResultsView } from './results-view.js';
+import { exportLatex } from './export-latex.js';
 
 /** Must match the command the server's code lenses run (server/src/lsp/convert.ts). */
 const COPY_LATEX_COMMAND = 'wedgework.copyLatex';
 const RESTART_SERVER_COMMAND = 'wedgework.restartServer';
+const EXPORT_LATEX_COMMAND = 'wedgework.exportLatex';
 
 let client: LanguageClient | undefined;
 
@@ -44,9 +47,12 @@ export async function activate(context: vscode.ExtensionContext): Promise<void> 
     traceOutputChannel,
   };
   client = new LanguageClient('wedgework', 'Wedgework', serverOptions, clientOptions);
+  // The results view (./results-view.ts) declares a client capability, so it is added before the start.
+  registerResultsView(context, client);
 
   context.subscriptions.push(
     vscode.commands.registerCommand(COPY_LATEX_COMMAND, copyLatex),
+    vscode.commands.registerCommand(EXPORT_LATEX_COMMAND, () => exportLatex(client)),
     vscode.commands.registerCommand(RESTART_SERVER_COMMAND, async () => {
       if (!client) return;
       await client.restart();

@@ -6,6 +6,13 @@
  * and the language server it starts would otherwise outlive the main process for seconds.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
+import { appendFileSync, existsSync, readFileSync, rmSync } from 'node:fs';
+
+/**
+ * When set (by scripts/e2e/run.ts), every group leader is also noted in this file, so that the runner
+ * can stop what a stage left behind even if the stage itself was killed before it could clean up.
+ */
+export const GROUP_FILE_VARIABLE = 'WEDGEWORK_E2E_GROUP_FILE';
 
 /** Leaders of the groups still running. */
 const groups = new Set<number>();
@@ -33,6 +40,8 @@ export function spawnGroup(command: string, args: string[], { env, cwd, onOutput
   const child = spawn(command, args, { env, cwd, detached: true, stdio: ['ignore', 'pipe', 'pipe'] });
   if (child.pid === undefined) throw new Error(`could not start ${command}`);
   groups.add(child.pid);
+  const groupFile = process.env[GROUP_FILE_VARIABLE];
+  if (groupFile) appendFileSync(groupFile, `${child.pid}\n`);
   child.stdout!.on('data', (chunk: Buffer) => onOutput?.(chunk));
   child.stderr!.on('data', (chunk: Buffer) => onOutput?.(chunk));
   return child as ChildProcess & { pid: number };
@@ -52,6 +61,18 @@ export async function stopGroup(pid: number, graceMs = 3000): Promise<void> {
   const killDeadline = Date.now() + 2000;
   while (groupAlive(pid) && Date.now() < killDeadline) await pause(20);
   groups.delete(pid);
+}
+
+/** Kills every group noted in `groupFile` that is still running, then removes the file; returns how many. */
+export function killNotedGroups(groupFile: string): number {
+  if (!existsSync(groupFile)) return 0;
+  let killed = 0;
+  for (const line of readFileSync(groupFile, 'utf8').split('\n')) {
+    const pid = Number(line);
+    if (Number.isInteger(pid) && pid > 1 && groupAlive(pid) && signalGroup(pid, 'SIGKILL')) killed++;
+  }
+  rmSync(groupFile, { force: true });
+  return killed;
 }
 
 /** Last resort when the test process itself ends: no group may outlive it. */

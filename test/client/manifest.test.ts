@@ -61,7 +61,7 @@ describe('extension manifest', () => {
     const client = readFileSync(join(ROOT, 'client/src/extension.ts'), 'utf8');
     const registered = [...client.matchAll(/'(wedgework\.[A-Za-z]+)'/g)].map((m) => m[1]!).sort();
     const contributed = manifest.contributes.commands.map((c: { command: string }) => c.command).sort();
-    assert.deepEqual(registered, ['wedgework.copyLatex', 'wedgework.restartServer']);
+    assert.deepEqual(registered, ['wedgework.copyLatex', 'wedgework.exportLatex', 'wedgework.restartServer']);
     assert.deepEqual(contributed, registered);
     for (const command of manifest.contributes.commands) assert.equal(command.category, 'Wedgework');
     assert.ok(contributed.includes(COPY_LATEX_COMMAND), 'the command the code lenses run');

@@ -9,14 +9,14 @@
  */
 import { after, before, describe, test } from 'node:test';
 import assert from 'node:assert/strict';
-import { copyFileSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { copyFileSync, mkdirSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { BrowserContext, Page } from 'playwright-core';
 import { ARTIFACTS, ROOT, VSIX } from '../../scripts/e2e/paths.js';
 import { prepareProfile, startCodeServer, type CodeServer } from '../../scripts/e2e/code-server.js';
 import { openBrowser } from '../../scripts/e2e/browser.js';
-import { SELECTORS, Workbench } from './workbench-page.js';
+import { FIRST_RESULT_WAIT_MS, SELECTORS, Workbench } from './workbench-page.js';
 import { makeWorkspace } from './workspace.js';
 import * as facts from './sample-facts.js';
 import { timed } from './timed.js';
@@ -49,7 +49,10 @@ describe('the extension in Restricted Mode', { timeout: 180_000 }, () => {
   after(async () => {
     await browser?.close().catch(() => {});
     await server?.stop();
-    if (server) copyFileSync(server.logPath, join(artifacts, 'code-server.log'));
+    if (server) {
+      mkdirSync(artifacts, { recursive: true });
+      copyFileSync(server.logPath, join(artifacts, 'code-server.log'));
+    }
     rmSync(scratch, { recursive: true, force: true });
   });
 
@@ -64,7 +67,8 @@ describe('the extension in Restricted Mode', { timeout: 180_000 }, () => {
 
   test('lenses, problems and hovers still work there', async () => {
     await bench.openFile(facts.SAMPLE_FILE, 'Sight lines of a two-camera calibration rig');
-    await bench.waitForText('the code lens of sightA', SELECTORS.codeLens, facts.SIGHT_A_LENS);
+    // The first lens waits for the extension to start its server and evaluate the file: allow more time.
+    await bench.waitForText('the code lens of sightA', SELECTORS.codeLens, facts.SIGHT_A_LENS, FIRST_RESULT_WAIT_MS);
     await bench.hoverWord(facts.HOVERED_LINE_TEXT, facts.HOVERED_NAME, facts.hoverExpectations());
     await page.keyboard.press('Escape');
     await bench.showProblems();

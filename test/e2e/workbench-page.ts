@@ -8,11 +8,12 @@ import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { missingFrom } from './sample-facts.js';
-
-export type Expected = readonly (string | RegExp)[];
+import { describeExpected, type Expected } from './shows.js';
 
 const POLL_MS = 100;
 export const DEFAULT_WAIT_MS = 30_000;
+/** For the first result of a session: the extension activates, starts its server, evaluates the file. */
+export const FIRST_RESULT_WAIT_MS = 60_000;
 
 const EDITOR = '.editor-instance .monaco-editor';
 export const SELECTORS = {
@@ -61,6 +62,16 @@ const WORD_CENTRE_SOURCE = `(({ selector, lineText, word }) => {
     offset += length;
   }
   return null;
+})`;
+
+/** Browser-side code for the centre of the first lens command whose text contains every string. */
+const LENS_CENTRE_SOURCE = `(({ selector, strings }) => {
+  const norm = (s) => s.replace(/\\u00a0/g, ' ');
+  const link = [...document.querySelectorAll(selector)].find((a) => strings.every((s) => norm(a.textContent).includes(s)));
+  if (!link) return null;
+  const box = link.getBoundingClientRect();
+  if (box.width === 0 || box.height === 0) return null;
+  return { x: box.left + Math.min(box.width / 2, 40), y: box.top + box.height / 2 };
 })`;
 
 export class Workbench {
@@ -113,7 +124,7 @@ export class Workbench {
     return this.fail(
       `${what}: no element ${selector} showed what was expected within ${timeout / 1000} s`,
       [
-        `expected: ${expected.map((e) => (typeof e === 'string' ? JSON.stringify(e) : String(e))).join(', ')}`,
+        `expected: ${describeExpected(expected)}`,
         closest === undefined ? 'the page showed: no such element' : `missing: ${missingFrom(closest, expected).join(', ')}`,
         ...(closest === undefined ? [] : [`the page showed (${seen.length} element(s)):`, ...seen.slice(0, 12).map((t) => `  | ${t.slice(0, 400)}`)]),
       ].join('\n'),
@@ -218,19 +229,27 @@ export class Workbench {
     );
   }
 
-  /** Clicks the command of the code lens showing `expected`. */
-  async clickLens(expected: Expected): Promise<void> {
-    await this.waitForText('the code lens to click', SELECTORS.codeLens, expected);
-    const lenses = this.page.locator(`${SELECTORS.codeLens} a`);
-    const count = await lenses.count();
-    for (let i = 0; i < count; i++) {
-      const text = normalize((await lenses.nth(i).textContent()) ?? '');
-      if (missingFrom(text, expected).length === 0) {
-        await lenses.nth(i).click();
+  /**
+   * Clicks the command of the code lens showing `expected`. The lens is found and clicked by its
+   * position on the page: the editor may render its lenses anew at any time (after each evaluation),
+   * and a lens found anew sits at the same place. Retried until the deadline if none is found.
+   */
+  async clickLens(expected: Expected, timeout = DEFAULT_WAIT_MS): Promise<void> {
+    await this.waitForText('the code lens to click', SELECTORS.codeLens, expected, timeout);
+    const strings = expected.filter((e): e is string => typeof e === 'string');
+    const deadline = Date.now() + timeout;
+    for (;;) {
+      const centre = (await this.page.evaluate(
+        `${LENS_CENTRE_SOURCE}(${JSON.stringify({ selector: `${SELECTORS.codeLens} a`, strings })})`,
+      )) as { x: number; y: number } | null;
+      if (centre) {
+        await this.page.mouse.click(centre.x, centre.y);
         return;
       }
+      if (Date.now() > deadline) break;
+      await this.page.waitForTimeout(POLL_MS);
     }
-    await this.fail('clicking the code lens', `no clickable lens shows ${expected.join(', ')}`);
+    await this.fail('clicking the code lens', `no clickable lens shows ${describeExpected(expected)}; lenses: ${(await this.texts(SELECTORS.codeLens)).join(' | ')}`);
   }
 
   /** What the page's clipboard holds (the browser context was granted clipboard-read). */

@@ -80,3 +80,77 @@ describe('problemsToShow', () => {
     assert.deepEqual(answering.problems[0]!.span, { start: claimProblem.span.start + 1, end: claimProblem.span.end + 1 });
   });
 });
+
+describe('evaluations that end after the user typed on', () => {
+  const atStart = { start: { line: 0, character: 0 }, end: { line: 0, character: 0 } };
+  const timeout: Problem = { code: 'limit/timeout', severity: 'error', message: 'stopped', span: { start: claimStart, end: TEXT.length - 1 } };
+
+  test('a late analysis is carried through the edits made while it ran', () => {
+    const store = new DocumentStore();
+    const entry = store.open(URI, 'wedge', 1, TEXT);
+    const ticket = store.beginEvaluation(entry);
+    store.change(URI, 2, [{ range: atStart, text: '# a\n' }]);
+    store.change(URI, 3, [{ range: atStart, text: '\n' }]);
+    store.recordEvaluation(entry, analysisOf(TEXT, [claimProblem]), ticket);
+    assert.equal(entry.evaluation?.version, 1, 'it describes the version that was evaluated');
+    assert.equal(entry.evaluation?.analysis.text, entry.document.getText(), 'its spans index the current text');
+    const shifted = { start: claimProblem.span.start + 5, end: claimProblem.span.end + 5 };
+    assert.deepEqual(problemsToShow(entry).map((p) => p.span), [shifted]);
+    assert.equal(entry.document.getText().slice(shifted.start, shifted.end), 'claim dim V = 5');
+    assert.deepEqual(entry.editLog, [], 'nothing is in flight any more, so no edits are kept');
+  });
+
+  test('edits are logged only while an evaluation is in flight', () => {
+    const store = new DocumentStore();
+    const entry = store.open(URI, 'wedge', 1, TEXT);
+    store.change(URI, 2, [{ range: atStart, text: '\n' }]);
+    assert.deepEqual(entry.editLog, []);
+    const ticket = store.beginEvaluation(entry);
+    store.change(URI, 3, [{ range: atStart, text: '\n' }]);
+    assert.equal(entry.editLog.length, 1);
+    store.abandonEvaluation(entry, ticket);
+    assert.deepEqual(entry.editLog, []);
+  });
+
+  test('an analysis older than the one recorded is ignored', () => {
+    const store = new DocumentStore();
+    const entry = store.open(URI, 'wedge', 1, TEXT);
+    const older = store.beginEvaluation(entry);
+    store.change(URI, 2, [{ range: atStart, text: '\n' }]);
+    const newer = store.beginEvaluation(entry);
+    const current = entry.document.getText();
+    store.recordEvaluation(entry, analysisOf(current, []), newer);
+    store.recordEvaluation(entry, analysisOf(TEXT, [claimProblem]), older);
+    assert.equal(entry.evaluation?.version, 2);
+    assert.deepEqual(problemsToShow(entry), []);
+  });
+
+  test('a stopped evaluation shows its problem beside the quick pass, until the next evaluation ends', () => {
+    const store = new DocumentStore();
+    const entry = store.open(URI, 'wedge', 1, TEXT);
+    const ticket = store.beginEvaluation(entry);
+    store.change(URI, 2, [{ range: atStart, text: '\n' }]);
+    store.recordStopped(entry, TEXT, timeout, ticket);
+    const freshSyntax: Problem = { code: 'syntax/example', severity: 'error', message: 'new', span: { start: 0, end: 1 } };
+    store.recordQuick(entry, analysisOf(entry.document.getText(), [freshSyntax]));
+    const shown = problemsToShow(entry);
+    assert.deepEqual(shown.map((p) => p.code), ['syntax/example', 'limit/timeout']);
+    assert.deepEqual(shown[1]!.span, { start: timeout.span.start + 1, end: timeout.span.end + 1 }, 'carried through the edit');
+
+    const next = store.beginEvaluation(entry);
+    store.recordEvaluation(entry, analysisOf(entry.document.getText(), []), next);
+    assert.deepEqual(problemsToShow(entry), []);
+    assert.equal(entry.stopped, undefined);
+  });
+
+  test('a stopped evaluation keeps the last results for hovers and lenses', () => {
+    const store = new DocumentStore();
+    const entry = store.open(URI, 'wedge', 1, TEXT);
+    store.recordEvaluation(entry, analysisOf(TEXT, [claimProblem]));
+    const ticket = store.beginEvaluation(entry);
+    store.recordStopped(entry, TEXT, timeout, ticket);
+    assert.equal(analysisForQueries(entry)?.problems[0], claimProblem);
+    // The same version was evaluated again and stopped: the stop is the news, beside the carried claim.
+    assert.deepEqual(problemsToShow(entry).map((p) => p.code), ['claim/example', 'limit/timeout']);
+  });
+});

@@ -14,6 +14,9 @@ import {
   ShutdownRequest,
   StreamMessageReader,
   StreamMessageWriter,
+  WorkDoneProgress,
+  WorkDoneProgressCreateRequest,
+  type ClientCapabilities,
   type ConfigurationItem,
   type InitializeResult,
   type ProtocolConnection,
@@ -45,11 +48,58 @@ class DiagnosticsInbox {
   }
 }
 
+/** One notification from the server, numbered in the order of arrival. */
+export interface LoggedNotification {
+  seq: number;
+  method: string;
+  params: any;
+}
+
+/**
+ * Every notification from the server, in the order it arrived (diagnostics
+ * included), so tests can tell what came before what without waiting on time.
+ */
+class NotificationLog {
+  readonly entries: LoggedNotification[] = [];
+  private waiters: { from: number; predicate: (n: LoggedNotification) => boolean; resolve: (n: LoggedNotification) => void }[] = [];
+
+  record(method: string, params: unknown): void {
+    const entry: LoggedNotification = { seq: this.entries.length, method, params };
+    this.entries.push(entry);
+    this.waiters = this.waiters.filter((w) => {
+      if (entry.seq < w.from || !w.predicate(entry)) return true;
+      w.resolve(entry);
+      return false;
+    });
+  }
+
+  /** How many notifications have arrived so far (the `seq` the next one gets). */
+  get count(): number {
+    return this.entries.length;
+  }
+
+  /** The first notification numbered `from` or later that matches, already here or still to come. */
+  waitFor(predicate: (n: LoggedNotification) => boolean, from = 0): Promise<LoggedNotification> {
+    const found = this.entries.find((n) => n.seq >= from && predicate(n));
+    if (found) return Promise.resolve(found);
+    return new Promise((resolve) => this.waiters.push({ from, predicate, resolve }));
+  }
+}
+
+export interface SessionOptions {
+  /** Client capabilities added to the test client's own (e.g. window.workDoneProgress, experimental). */
+  capabilities?: ClientCapabilities;
+}
+
 export interface ServerSession {
   connection: ProtocolConnection;
   child: ChildProcessWithoutNullStreams;
   initializeResult: InitializeResult;
   diagnostics: DiagnosticsInbox;
+  /** Every notification, diagnostics included, in order of arrival. */
+  notifications: NotificationLog;
+  /** Every progress token the server asked the client to create (window/workDoneProgress/create). */
+  progressTokens: (string | number)[];
   /** Every workspace/configuration item the server asked for. */
   configurationRequests: ConfigurationItem[];
   /** What the client answers for the `wedgework` section; tests may change it. */
@@ -64,7 +114,7 @@ export interface ServerSession {
   kill(): void;
 }
 
-export async function startServerSession(settings: Record<string, unknown>): Promise<ServerSession> {
+export async function startServerSession(settings: Record<string, unknown>, options: SessionOptions = {}): Promise<ServerSession> {
   const child = spawn(process.execPath, [join(ROOT, 'dist/server.cjs'), '--stdio'], {
     cwd: ROOT,
     stdio: ['pipe', 'pipe', 'pipe'],
@@ -76,11 +126,14 @@ export async function startServerSession(settings: Record<string, unknown>): Pro
 
   const connection = createProtocolConnection(new StreamMessageReader(child.stdout), new StreamMessageWriter(child.stdin));
   const diagnostics = new DiagnosticsInbox();
+  const notifications = new NotificationLog();
   const session: ServerSession = {
     connection,
     child,
     initializeResult: undefined as unknown as InitializeResult,
     diagnostics,
+    notifications,
+    progressTokens: [],
     configurationRequests: [],
     settings,
     stderr: () => stderr,
@@ -95,7 +148,17 @@ export async function startServerSession(settings: Record<string, unknown>): Pro
       if (child.exitCode === null && child.signalCode === null) child.kill();
     },
   };
-  connection.onNotification(PublishDiagnosticsNotification.type, (params) => diagnostics.deliver(params));
+  connection.onNotification(PublishDiagnosticsNotification.type, (params) => {
+    notifications.record(PublishDiagnosticsNotification.method, params);
+    diagnostics.deliver(params);
+  });
+  // Every other notification ($/progress, window/logMessage, wedgework/results, …).
+  connection.onUnhandledNotification((message) => notifications.record(message.method, message.params));
+  // The connection delivers $/progress only to a handler of its token, as a client registers it here.
+  connection.onRequest(WorkDoneProgressCreateRequest.type, ({ token }) => {
+    session.progressTokens.push(token);
+    connection.onProgress(WorkDoneProgress.type, token, (value) => notifications.record('$/progress', { token, value }));
+  });
   connection.onRequest(ConfigurationRequest.type, (params) => {
     session.configurationRequests.push(...params.items);
     return params.items.map((item) => (item.section === 'wedgework' ? session.settings : null));
@@ -115,6 +178,7 @@ export async function startServerSession(settings: Record<string, unknown>): Pro
           hover: { contentFormat: ['markdown', 'plaintext'] },
           publishDiagnostics: { relatedInformation: true, versionSupport: true },
         },
+        ...options.capabilities,
       },
     });
     await connection.sendNotification(InitializedNotification.type, {});

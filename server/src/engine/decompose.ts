@@ -23,7 +23,9 @@
 import type { Field } from './field.js';
 import { coordinatesIn, kernel, rref } from './matrix.js';
 import { coefficient, fromVector, sortedTerms, wedge, type Multivector } from './multivector.js';
-import { checkSubset, complement, insertIndex, subsetKey } from './subsets.js';
+import { primeField } from './prime-field.js';
+import { QQ, lcmBigInt, type Rational } from './rational.js';
+import { binomialBig, checkSubset, complement, forEachSubset, insertIndex, subsetKey } from './subsets.js';
 
 export type Decomposition<T> =
   | { kind: 'zero' }
@@ -79,34 +81,75 @@ function spanOfStream<T>(F: Field<T>, n: number, emit: (push: (row: T[]) => bool
 }
 
 /**
+ * The rows of the matrix of v ↦ v ∧ ω (see `divisorSpace`), one per
+ * (k+1)-subset J that occurs, each passed to `push`; stops when push says so.
+ * `image` maps each coefficient into the field the rows are wanted in.
+ */
+function emitDivisorRows<T, S>(
+  F: Field<T>,
+  mv: Multivector<T>,
+  zero: S,
+  image: (c: T) => S,
+  push: (row: S[]) => boolean,
+): void {
+  const { n } = mv;
+  const seen = new Set<string>();
+  for (const { subset } of sortedTerms(mv)) {
+    for (const i of complement(subset, n)) {
+      const { sorted: J } = insertIndex(subset, i);
+      const key = subsetKey(J);
+      if (seen.has(key)) continue;
+      seen.add(key);
+      // Row J: column x ∈ J gets the coefficient of e_x ∧ e_{J∖x} = (−1)^(position of x in J) e_J.
+      const row = new Array<S>(n).fill(zero);
+      J.forEach((x, position) => {
+        const t = mv.terms.get(subsetKey(J.filter((_, s) => s !== position)));
+        if (t !== undefined) row[x] = image(position % 2 === 0 ? t.coeff : F.neg(t.coeff));
+      });
+      if (!push(row)) return;
+    }
+  }
+}
+
+/** The prime for the modular rank test of `divisorSpace` over the rationals. */
+const RANK_TEST_PRIME = 2n ** 31n - 1n;
+
+/**
+ * Over the rationals, whether the rows of v ↦ v ∧ ω have rank n modulo a
+ * prime. If they do, they have rank n over the rationals too (an n×n minor
+ * that is nonzero modulo p is nonzero; common practice, no source), so
+ * D(ω) = 0 without any fraction arithmetic. A denominator divisible by p
+ * makes the test inconclusive (false).
+ */
+function fullRankModular(mv: Multivector<Rational>): boolean {
+  const Fp = primeField(RANK_TEST_PRIME) as Field<number>;
+  let defined = true;
+  const basis = spanOfStream(Fp, mv.n, (push) =>
+    emitDivisorRows(QQ, mv, 0, (c) => {
+      if (c.den % RANK_TEST_PRIME === 0n) {
+        defined = false;
+        return 0;
+      }
+      return Fp.fromRational(c.num, c.den);
+    }, push),
+  );
+  return defined && basis.length === mv.n;
+}
+
+/**
  * A basis, in reduced row echelon form, of D(ω) = {v ∈ V : v ∧ ω = 0}.
  *
  * The map v ↦ v ∧ ω sends e_i to Σ_K c_K · e_i ∧ e_K, and e_i ∧ e_K is
  * wedgeSign([i], K) · e_{K∪{i}} for i ∉ K. Its matrix has one row per
  * (k+1)-subset J = K ∪ {i} that occurs, built from the terms of ω alone and
  * streamed into a running row reduction that stops once the rank is n; D(ω)
- * is its kernel. For ω = 0 this is the whole space.
+ * is its kernel. For ω = 0 this is the whole space. Over the rationals a rank
+ * test modulo a prime settles the common case D(ω) = 0 first.
  */
 export function divisorSpace<T>(F: Field<T>, mv: Multivector<T>): T[][] {
   const { n } = mv;
-  const seen = new Set<string>();
-  const reduced = spanOfStream(F, n, (push) => {
-    for (const { subset } of sortedTerms(mv)) {
-      for (const i of complement(subset, n)) {
-        const { sorted: J } = insertIndex(subset, i);
-        const key = subsetKey(J);
-        if (seen.has(key)) continue;
-        seen.add(key);
-        // Row J: column x ∈ J gets the coefficient of e_x ∧ e_{J∖x} = (−1)^(position of x in J) e_J.
-        const row = new Array<T>(n).fill(F.zero);
-        J.forEach((x, position) => {
-          const t = mv.terms.get(subsetKey(J.filter((_, s) => s !== position)));
-          if (t !== undefined) row[x] = position % 2 === 0 ? t.coeff : F.neg(t.coeff);
-        });
-        if (!push(row)) return;
-      }
-    }
-  });
+  if ((F as unknown) === QQ && mv.terms.size > 0 && fullRankModular(mv as unknown as Multivector<Rational>)) return [];
+  const reduced = spanOfStream(F, n, (push) => emitDivisorRows(F, mv, F.zero, (c) => c, push));
   return rref(F, kernel(F, reduced, n), n).rows;
 }
 
@@ -158,6 +201,26 @@ export function evaluateRelation<T>(
   return { left: left.slice(), right: right.slice(), terms, value };
 }
 
+/**
+ * Keys of the contraction table: for n ≤ 52 the bit mask Σ 2^i of the subset,
+ * an exact number (building and hashing the text keys of subsetKey was the
+ * larger part of the cost); otherwise the text key.
+ */
+type TableKey = number | string;
+const MASK_LIMIT = 52;
+const BIT: readonly number[] = Array.from({ length: MASK_LIMIT }, (_, i) => 2 ** i);
+
+function tableKey(subset: readonly number[], n: number): TableKey {
+  if (n > MASK_LIMIT) return subsetKey(subset);
+  let key = 0;
+  for (const x of subset) key += BIT[x]!;
+  return key;
+}
+
+function dropAt(subset: readonly number[], r: number): number[] {
+  return subset.filter((_, s) => s !== r);
+}
+
 /** A (k−1)-subset I with the contraction u_I = Σ_{j ∉ I} p(I, j) e_j of ω by e*_I (see `evaluateRelation`). */
 interface Contraction<T> {
   left: number[];
@@ -165,23 +228,24 @@ interface Contraction<T> {
 }
 
 /**
- * Every nonzero contraction u_I, keyed by subsetKey(I), built in one pass over
+ * Every nonzero contraction u_I, keyed by tableKey(I), built in one pass over
  * the terms: a term p_K contributes p(K ∖ {k_r}, k_r) = (−1)^(k−1−r) p_K to
  * u_{K∖{k_r}} in column k_r, and every nonzero p(I, j) arises so, once. The
  * terms are taken in lexicographic order and, within a term, the last index
  * is dropped first, so the first entry for e_0∧e_1 + … gives the textbook
  * relation. Cost: k map updates per term.
  */
-function contractionTable<T>(F: Field<T>, mv: Multivector<T>): Map<string, Contraction<T>> {
-  const table = new Map<string, Contraction<T>>();
+function contractionTable<T>(F: Field<T>, mv: Multivector<T>): Map<TableKey, Contraction<T>> {
+  const table = new Map<TableKey, Contraction<T>>();
   for (const { subset, coeff } of sortedTerms(mv)) {
     const k = subset.length;
+    const whole = mv.n <= MASK_LIMIT ? (tableKey(subset, mv.n) as number) : 0;
     for (let r = k - 1; r >= 0; r--) {
-      const left = subset.filter((_, s) => s !== r);
-      const key = subsetKey(left);
+      // With bit-mask keys, dropping index subset[r] is a subtraction; otherwise the key is built.
+      const key = mv.n <= MASK_LIMIT ? whole - BIT[subset[r]!]! : tableKey(dropAt(subset, r), mv.n);
       let entry = table.get(key);
       if (entry === undefined) {
-        entry = { left, u: new Array<T>(mv.n).fill(F.zero) };
+        entry = { left: dropAt(subset, r), u: new Array<T>(mv.n).fill(F.zero) };
         table.set(key, entry);
       }
       entry.u[subset[r]!] = (k - 1 - r) % 2 === 0 ? coeff : F.neg(coeff);
@@ -194,17 +258,46 @@ function contractionTable<T>(F: Field<T>, mv: Multivector<T>): Map<string, Contr
 function failedRelationIn<T>(
   F: Field<T>,
   mv: Multivector<T>,
-  table: Map<string, Contraction<T>>,
+  table: Map<TableKey, Contraction<T>>,
   divisorBasis: T[][],
 ): FailedRelation<T> | undefined {
   if (mv.k < 2) return undefined;
   for (const { left, u } of table.values()) {
     if (coordinatesIn(F, divisorBasis, u) !== undefined) continue;
-    const product = sortedTerms(wedge(F, fromVector(F, u), mv));
-    // u lies outside D(ω), so u ∧ ω ≠ 0 and the first term exists.
-    return evaluateRelation(F, mv, left, product[0]!.subset);
+    // u lies outside D(ω), so u ∧ ω ≠ 0 and a first term exists.
+    return evaluateRelation(F, mv, left, firstTermOfWedge(F, u, mv));
   }
   return undefined;
+}
+
+/**
+ * The lexicographically first (k+1)-subset J whose coefficient in u ∧ ω is
+ * nonzero (u ∧ ω ≠ 0). That coefficient is Σ_{x ∈ J} (−1)^(position of x) u_x
+ * c_{J∖x}, so when there are few (k+1)-subsets compared with the products the
+ * wedge would form, they are tried in order, which usually stops at the first;
+ * otherwise the wedge is formed and its first term taken.
+ */
+function firstTermOfWedge<T>(F: Field<T>, u: readonly T[], mv: Multivector<T>): number[] {
+  const { n, k } = mv;
+  const support = u.filter((x) => !F.isZero(x)).length;
+  if (binomialBig(n, k + 1) <= BigInt(4 * support * mv.terms.size)) {
+    let found: number[] | undefined;
+    forEachSubset(n, k + 1, (J) => {
+      let sum = F.zero;
+      J.forEach((x, position) => {
+        if (F.isZero(u[x]!)) return;
+        const t = mv.terms.get(subsetKey(dropAt(J, position)));
+        if (t === undefined) return;
+        const product = F.mul(u[x]!, t.coeff);
+        sum = position % 2 === 0 ? F.add(sum, product) : F.sub(sum, product);
+      });
+      if (F.isZero(sum)) return true;
+      found = J.slice();
+      return false;
+    });
+    return found!;
+  }
+  return sortedTerms(wedge(F, fromVector(F, u), mv))[0]!.subset;
 }
 
 /**
@@ -246,17 +339,39 @@ export function findFailedRelation<T>(
 function chartRowsIfDecomposable<T>(
   F: Field<T>,
   mv: Multivector<T>,
-  table: Map<string, Contraction<T>>,
+  table: Map<TableKey, Contraction<T>>,
   K: readonly number[],
   pK: T,
 ): T[][] | undefined {
   const k = K.length;
   const rows = K.map((_, r) => {
-    const { u } = table.get(subsetKey(K.filter((_, s) => s !== r)))!;
+    const { u } = table.get(tableKey(dropAt(K, r), mv.n))!;
     // p(I, k_r) = (−1)^(k−1−r) p_K for I = K ∖ {k_r}.
     return (k - 1 - r) % 2 === 0 ? u : u.map((x) => F.neg(x));
   });
   const others = complement(K, mv.n);
+  const passes =
+    (F as unknown) === QQ
+      ? chartTestOnIntegers(
+          table as unknown as Map<TableKey, Contraction<Rational>>,
+          rows as unknown as Rational[][],
+          K,
+          others,
+          pK as unknown as Rational,
+        )
+      : chartTest(F, table, rows, K, others, pK);
+  return passes ? rows : undefined;
+}
+
+/** The test of `chartRowsIfDecomposable`: p_K·u[j] = Σ_r u[k_r]·row_r[j] for every u in the table and j ∉ K. */
+function chartTest<T>(
+  F: Field<T>,
+  table: Map<TableKey, Contraction<T>>,
+  rows: readonly (readonly T[])[],
+  K: readonly number[],
+  others: readonly number[],
+  pK: T,
+): boolean {
   for (const { u } of table.values()) {
     for (const j of others) {
       let expected = F.zero;
@@ -264,10 +379,44 @@ function chartRowsIfDecomposable<T>(
         const x = u[c]!;
         if (!F.isZero(x)) expected = F.add(expected, F.mul(x, rows[r]![j]!));
       });
-      if (!F.eq(expected, F.mul(pK, u[j]!))) return undefined;
+      if (!F.eq(expected, F.mul(pK, u[j]!))) return false;
     }
   }
-  return rows;
+  return true;
+}
+
+/**
+ * The same test over the rationals on bigints. Both sides are quadratic in the
+ * coefficients of ω, so scaling every coefficient by the lcm λ of their
+ * denominators scales both by λ² and leaves the test unchanged; after that
+ * every value is an integer and no fraction needs reducing.
+ */
+function chartTestOnIntegers(
+  table: Map<TableKey, Contraction<Rational>>,
+  rows: readonly (readonly Rational[])[],
+  K: readonly number[],
+  others: readonly number[],
+  pK: Rational,
+): boolean {
+  let lambda = 1n;
+  for (const { u } of table.values()) for (const x of u) if (x.den !== 1n) lambda = lcmBigInt(lambda, x.den);
+  const integral = (v: readonly Rational[]): bigint[] =>
+    lambda === 1n ? v.map((x) => x.num) : v.map((x) => x.num * (lambda / x.den));
+  const rowsZ = rows.map(integral);
+  const pKZ = integral([pK])[0]!;
+  const k = K.length;
+  for (const { u } of table.values()) {
+    const uZ = integral(u);
+    for (const j of others) {
+      let expected = 0n;
+      for (let r = 0; r < k; r++) {
+        const x = uZ[K[r]!]!;
+        if (x !== 0n) expected += x * rowsZ[r]![j]!;
+      }
+      if (expected !== pKZ * uZ[j]!) return false;
+    }
+  }
+  return true;
 }
 
 /**

@@ -2,11 +2,12 @@
  * The prime fields GF(p).
  *
  * For p < 2^31 the elements are JavaScript numbers in [0, p): sums stay below
- * 2^32 and products are formed in two exact halves (see `mulModSmall`), so no
- * step ever leaves the range where doubles are exact integers. For larger p
- * the elements are bigints in [0, p).
+ * 2^32 and products are reduced exactly by the floating-point-assisted method
+ * of modular-arithmetic.ts, so no step ever leaves the range where doubles are
+ * exact integers. For larger p the elements are bigints in [0, p).
  */
 import { DivisionByZeroError, type Field } from './field.js';
+import { MODULAR_LIMIT, invMod, mulMod } from './modular-arithmetic.js';
 import { isPrime } from './primes.js';
 
 /** Raised when a field GF(p) is asked for with p not a prime. */
@@ -24,36 +25,17 @@ export class NotPrimeError extends Error {
 }
 
 /** Moduli below this use number elements. */
-const SMALL_MODULUS_LIMIT = 2n ** 31n;
+const SMALL_MODULUS_LIMIT = BigInt(MODULAR_LIMIT);
+
+/** The fields with number elements, and their moduli, for the fast paths that work on the numbers directly. */
+const smallModuli = new WeakMap<object, number>();
 
 /**
- * a·b mod p for a, b in [0, p) and p < 2^31, exactly.
- *
- * The full product can reach 2^62, past the 2^53 where doubles stop being
- * exact, so b is split into 16-bit halves: a·(b >> 16) < 2^46, its residue
- * times 2^16 is below 2^47, and a·(b & 0xffff) < 2^47, so every intermediate
- * value is an exact integer.
+ * p, when F is one of the fields GF(p) made here with p < 2^31 (whose elements
+ * are the numbers in [0, p)); undefined for every other field, copies included.
  */
-function mulModSmall(a: number, b: number, p: number): number {
-  const high = Math.floor(b / 65536);
-  const low = b - high * 65536;
-  return (((a * high) % p) * 65536 + a * low) % p;
-}
-
-/** The inverse of a modulo p by the extended Euclidean algorithm; a in (0, p). */
-function invModSmall(a: number, p: number): number {
-  // Invariant: r0 ≡ s0·a and r1 ≡ s1·a (mod p); every value stays below p in absolute value.
-  let r0 = p;
-  let r1 = a;
-  let s0 = 0;
-  let s1 = 1;
-  while (r1 !== 0) {
-    const q = Math.floor(r0 / r1);
-    [r0, r1] = [r1, r0 - q * r1];
-    [s0, s1] = [s1, s0 - q * s1];
-  }
-  // r0 is gcd(a, p) = 1 because p is prime.
-  return s0 < 0 ? s0 + p : s0;
+export function smallPrimeModulus(F: Field<unknown>): number | undefined {
+  return smallModuli.get(F);
 }
 
 function invModBig(a: bigint, p: bigint): bigint {
@@ -80,14 +62,15 @@ function zeroDivisor(name: string): DivisionByZeroError {
 
 function smallPrimeField(p: bigint): Field<number> {
   const q = Number(p);
+  const reciprocal = 1 / q;
   const name = `GF(${p})`;
   const inv = (a: number): number => {
     if (a === 0) throw zeroDivisor(name);
-    return invModSmall(a, q);
+    return invMod(a, q);
   };
   const fromBigInt = (n: bigint): number => Number(reduceBig(n, p));
   const format = (a: number) => a.toString();
-  return Object.freeze({
+  const field: Field<number> = Object.freeze({
     name,
     characteristic: p,
     zero: 0,
@@ -100,10 +83,10 @@ function smallPrimeField(p: bigint): Field<number> {
       const d = a - b;
       return d < 0 ? d + q : d;
     },
-    mul: (a: number, b: number) => mulModSmall(a, b, q),
+    mul: (a: number, b: number) => mulMod(a, b, q, reciprocal),
     neg: (a: number) => (a === 0 ? 0 : q - a),
     inv,
-    div: (a: number, b: number) => mulModSmall(a, inv(b), q),
+    div: (a: number, b: number) => mulMod(a, inv(b), q, reciprocal),
     eq: (a: number, b: number) => a === b,
     isZero: (a: number) => a === 0,
     isOne: (a: number) => a === 1,
@@ -111,11 +94,13 @@ function smallPrimeField(p: bigint): Field<number> {
     fromRational: (num: bigint, den: bigint) => {
       const d = fromBigInt(den);
       if (d === 0) throw new DivisionByZeroError(`division by zero in ${name}: ${den} is 0 modulo ${p}`);
-      return mulModSmall(fromBigInt(num), invModSmall(d, q), q);
+      return mulMod(fromBigInt(num), invMod(d, q), q, reciprocal);
     },
     format,
     latex: format,
   });
+  smallModuli.set(field, q);
+  return field;
 }
 
 function bigPrimeField(p: bigint): Field<bigint> {

@@ -13,9 +13,11 @@ import { subspacePlucker, type Environment } from './environment.js';
 import { checkCoordinateLimit, evaluate } from './expressions.js';
 import { asMultivector } from './arguments.js';
 import { propertyHolds } from './combinatorics.js';
-import { fail } from './failure.js';
+import { Failure, fail } from './failure.js';
+import { partitionReplacement, pointLiteral, valueReplacement } from './fixes/literals.js';
 import { matrixLatex } from './latex.js';
 import { formatCombination, formatMatrixInline, formatMultivector, formatPoint, formatTuple } from './text.js';
+import type { TextEdit } from './types.js';
 import { describeValue, type Scalar, type SubspaceValue, type Value } from './values.js';
 
 export interface ClaimOutcome {
@@ -28,6 +30,11 @@ export interface ClaimOutcome {
   found: string;
   /** LaTeX of the finding (e.g. the failed relation). */
   latex: string;
+  /**
+   * For a false claim of a value: the computed value written over the claimed
+   * one, in the file's syntax and conventions (the quick fix of the problem).
+   */
+  replacement?: TextEdit;
 }
 
 export function checkClaim(env: Environment, source: string, s: ClaimStmt): ClaimOutcome {
@@ -40,7 +47,7 @@ export function checkClaim(env: Environment, source: string, s: ClaimStmt): Clai
   }
   if (op === 'is' || op === 'is not') return propertyClaim(env, subject, subjectText, claimed, op === 'is', s);
   const otherExpr = s.relation.other!;
-  if (subject.t === 'schubert') return partitionClaim(subject.partition, subjectText, otherExpr, claimed, op === '=', s);
+  if (subject.t === 'schubert') return partitionClaim(subject.partition, subjectText, otherExpr, claimed, op === '=', s, source);
   // A count is compared with a whole number as written, not with its image in
   // the field: over GF(2), `dim A = 3` must not read 3 as 1.
   const other: Value =
@@ -150,13 +157,15 @@ function equalityClaim(
 ): ClaimOutcome {
   const F = env.F;
   const code = wanted ? 'claim/equality' : 'claim/inequality';
-  const verdict = (equal: boolean, found: string, latex = '', specific?: string): ClaimOutcome => ({
+  const verdict = (equal: boolean, found: string, latex = '', specific?: string, replacement?: TextEdit): ClaimOutcome => ({
     holds: equal === wanted,
     // A false `=` gets the code of what was compared; a false `!=` is always claim/inequality.
     code: wanted && specific ? specific : code,
     claimed,
     found,
     latex,
+    // Only a false `=` has a value to correct: a false `!=` means the two sides are equal.
+    ...(wanted && !equal && replacement ? { replacement } : {}),
   });
 
   // A count against a number: dim L = 2.
@@ -168,7 +177,9 @@ function equalityClaim(
       fail('type/operand', s.relation.span, `cannot compare ${describeValue(subject)} with ${describeValue(other)}`);
     }
     const found = a === b ? `${subjectText} = ${a}` : `${subjectText} is ${a}, not ${b}`;
-    return verdict(a === b, found, '', 'claim/dimension');
+    // The number written on the right is the claimed value; the left side is what was computed.
+    const replacement = s.relation.other!.type === 'number' ? valueReplacement(s.relation.other!.span, String(a)) : undefined;
+    return verdict(a === b, found, '', 'claim/dimension', replacement);
   }
 
   // A projective point against a subspace or multivector: plucker(L) = [1 : 3 : …].
@@ -178,12 +189,22 @@ function equalityClaim(
     const thingText = other.t === 'point' ? subjectText : otherText;
     const p = pluckerDense(env, thing, s.span);
     if (!p) fail('type/operand', s.relation.span, `a projective point is compared with a subspace or a multivector, not with ${describeValue(thing)}`);
+    const pointSpan = (other.t === 'point' ? s.relation.other! : s.subject).span;
+    // The computed point, in the file's order and normalization, written as a point literal.
+    const computed = (): TextEdit | undefined => {
+      if (p.dense.every((x) => F.isZero(x))) return undefined;
+      const literal = pointLiteral(displayPoint(env, p.dense, p.n, p.k).normalized.map((x) => F.format(x)));
+      return literal === undefined ? undefined : { span: pointSpan, newText: literal };
+    };
     if (point.values.length !== p.dense.length) {
-      fail(
-        'type/wrong-length',
-        (other.t === 'point' ? s.relation.other! : s.subject).span,
-        `this point has ${point.values.length} coordinates, but G(${p.k},${p.n}) has C(${p.n},${p.k}) = ${binomialBig(p.n, p.k)}`,
-      );
+      const replacement = computed();
+      throw new Failure({
+        code: 'type/wrong-length',
+        severity: 'error',
+        message: `this point has ${point.values.length} coordinates, but G(${p.k},${p.n}) has C(${p.n},${p.k}) = ${binomialBig(p.n, p.k)}`,
+        span: pointSpan,
+        ...(replacement ? { fixes: [{ title: `Replace with the computed point ${shortTitle(replacement.newText)}`, edits: [replacement], preferred: true }] } : {}),
+      });
     }
     if (point.values.every((x) => F.isZero(x))) {
       fail('math/zero-point', (other.t === 'point' ? s.relation.other! : s.subject).span, 'all coordinates are zero: that is no projective point');
@@ -199,6 +220,7 @@ function equalityClaim(
       `${thingText} is ${formatPoint(F, shown.normalized)} (${shown.applied}), which is not a multiple of ${formatPoint(F, point.values)}${mismatch}`,
       '',
       'claim/plucker',
+      computed(),
     );
   }
 
@@ -213,7 +235,10 @@ function equalityClaim(
 
   if (subject.t === 'vector' && other.t === 'vector') {
     const equal = subject.space.name === other.space.name && subject.coords.every((x, i) => F.eq(x, other.coords[i]));
-    return verdict(equal, `${subjectText} = ${formatTuple(F, subject.coords)} and ${otherText} = ${formatTuple(F, other.coords)}`);
+    // A tuple written out is the claimed value: `claim p = (1, 2, 0)`.
+    const written = s.relation.other!.type === 'tuple' && subject.space.name === other.space.name;
+    const replacement = written ? valueReplacement(s.relation.other!.span, formatTuple(F, subject.coords)) : undefined;
+    return verdict(equal, `${subjectText} = ${formatTuple(F, subject.coords)} and ${otherText} = ${formatTuple(F, other.coords)}`, '', undefined, replacement);
   }
 
   if (subject.t === 'scalar' && other.t === 'scalar') {
@@ -224,7 +249,10 @@ function equalityClaim(
       : literal
         ? `${subjectText} is ${F.format(subject.value)}, not ${F.format(other.value)}`
         : `${subjectText} = ${F.format(subject.value)} and ${otherText} = ${F.format(other.value)}`;
-    return verdict(equal, found);
+    // Only a number as written is replaced (`claim t = -2`), never an expression such as `-b`.
+    const o = s.relation.other!;
+    const number = o.type === 'number' || (o.type === 'unary' && o.operand.type === 'number');
+    return verdict(equal, found, '', undefined, number ? valueReplacement(o.span, F.format(subject.value)) : undefined);
   }
 
   // `omega ^ omega = 0`: a vector or multivector against the scalar zero.
@@ -280,6 +308,7 @@ function partitionClaim(
   claimed: string,
   wanted: boolean,
   s: ClaimStmt,
+  source: string,
 ): ClaimOutcome {
   const items = other.type === 'tuple' ? other.items : [other];
   const written = items.map((item) => {
@@ -295,7 +324,8 @@ function partitionClaim(
     code: wanted ? 'claim/schubert' : 'claim/inequality',
     claimed,
     found: `${subjectText} has the partition (${partition.join(', ')})${equal ? '' : `, not (${written.join(', ')})`}`,
-    latex: `\lambda = (${partition.join(', ')})`,
+    latex: `\\lambda = (${partition.join(', ')})`,
+    ...(wanted && !equal ? { replacement: partitionReplacement(source, other.span, partition) } : {}),
   };
 }
 
@@ -329,4 +359,9 @@ function subspaceDifference(env: Environment, a: SubspaceValue, b: SubspaceValue
   const outside = a.basis.find((r) => !coordinatesIn(F, b.basis, r));
   const where = outside ? `; the vector ${formatTuple(F, outside)} of ${aText} is not in ${bText}` : '';
   return `${aText} and ${bText} are different ${a.basis.length}-dimensional subspaces (reduced bases ${formatMatrixInline(F, a.basis)} and ${formatMatrixInline(F, b.basis)})${where}`;
+}
+
+/** A menu title quotes at most a line's worth of the new text. */
+export function shortTitle(text: string): string {
+  return text.length <= 48 ? text : `${text.slice(0, 45)}…`;
 }

@@ -39,7 +39,8 @@ import { decompositionOf, describeRelation } from './decomposition.js';
 import { applyMap, callGeometry } from './geometry.js';
 import { callCombinatorics } from './combinatorics.js';
 import { formatCombination, formatScalar } from './text.js';
-import type { Span } from './types.js';
+import { columnsFixes, rowsFixes, spanFixes } from './fixes/dependency-fixes.js';
+import type { Fix, Span } from './types.js';
 import {
   describeValue,
   type MatrixValue,
@@ -343,9 +344,11 @@ function reportDependency(
   related: { span: Span; message: string }[],
   whole: Span,
   what: string,
+  fixes?: () => Fix[],
 ): void {
   const dep = findDependency(env.F, rows);
   if (!dep) return;
+  const offered = fixes?.() ?? [];
   const message =
     `${what} is degenerate: ${describeDependency(env, names, dep.index, dep.coefficients)}` +
     (dep.index > 0 ? ` (${names[dep.index]} depends on the vectors before it)` : '') +
@@ -356,6 +359,7 @@ function reportDependency(
     message,
     span: spans[dep.index] ?? whole,
     ...(related.length ? { related } : {}),
+    ...(offered.length ? { fixes: offered } : {}),
   });
 }
 
@@ -376,7 +380,7 @@ function spanCall(env: Environment, e: Call, ctx: ExprContext): SubspaceValue {
     const bound = env.bindings.get(arg.name.name);
     return bound ? [{ span: bound.declSpan, message: `${arg.name.name} is declared here` }] : [];
   });
-  reportDependency(env, 'math/degenerate-span', rows, names, e.args.map((a) => a.span), related, e.span, 'this list of vectors');
+  reportDependency(env, 'math/degenerate-span', rows, names, e.args.map((a) => a.span), related, e.span, 'this list of vectors', () => spanFixes(env, e, rows));
   return subspaceOf(env, space, rows, { given: rows });
 }
 
@@ -391,7 +395,7 @@ function rowsSubspace(env: Environment, e: RowsExpr, ctx: ExprContext): Subspace
   const space = contextSpace(env, ctx, e.matrix.span, m.ncols, 'this matrix');
   const rowSpans = e.matrix.rows.map((r) => ({ start: r[0]!.span.start, end: r[r.length - 1]!.span.end }));
   const names = m.rows.map((_, i) => `row ${i + 1}`);
-  reportDependency(env, 'math/degenerate-rows', m.rows, names, rowSpans, [], e.span, 'this basis matrix');
+  reportDependency(env, 'math/degenerate-rows', m.rows, names, rowSpans, [], e.span, 'this basis matrix', () => rowsFixes(env, e, m.rows));
   return subspaceOf(env, space, m.rows, { given: m.rows });
 }
 
@@ -401,7 +405,7 @@ function columnsSubspace(env: Environment, e: ColumnsExpr, ctx: ExprContext): Su
   const space = contextSpace(env, ctx, e.matrix.span, m.rows.length, 'this matrix (read by columns)');
   const vectors = Array.from({ length: m.ncols }, (_, j) => m.rows.map((r) => r[j]));
   const names = vectors.map((_, j) => `column ${j + 1}`);
-  reportDependency(env, 'math/degenerate-rows', vectors, names, [], [], e.span, 'this basis matrix');
+  reportDependency(env, 'math/degenerate-rows', vectors, names, [], [], e.span, 'this basis matrix', () => columnsFixes(env, e, vectors));
   return subspaceOf(env, space, vectors, { given: vectors });
 }
 

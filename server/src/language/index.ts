@@ -9,10 +9,13 @@
 import { parseProgram } from './parse.js';
 import { evaluateProgram } from './program.js';
 import { resolveNames } from './scope.js';
-import { readConventions } from './conventions.js';
+import { conventionSentence, readConventions } from './conventions.js';
 import { DEFAULT_LIMITS, type Analysis, type AnalyzeOptions, type Hover, type Lens, type Problem } from './types.js';
 
 export * from './types.js';
+export * from './services/index.js';
+export { actionsAt, applyEdits } from './fixes/index.js';
+export { exportLatex } from './latex-export.js';
 
 export function analyze(text: string, options: AnalyzeOptions): Analysis {
   try {
@@ -31,11 +34,20 @@ export function analyze(text: string, options: AnalyzeOptions): Analysis {
       ...(r.target.space !== undefined ? { space: r.target.space } : {}),
     }));
     const problems: Problem[] = [...syntax, ...conventions.problems, ...resolution.problems];
-    if (!options.evaluate) return { text, problems: sortProblems(problems), results: [], references, evaluated: false };
-    const outcome = evaluateProgram(program, text, conventions.convention, { ...DEFAULT_LIMITS, ...options.limits });
+    const facts = { program, symbols: resolution.symbols, uses: resolution.references };
+    if (!options.evaluate) return { text, problems: sortProblems(problems), results: [], references, evaluated: false, syntax: facts };
+    const outcome = evaluateProgram(program, text, conventions.convention, { ...DEFAULT_LIMITS, ...options.limits }, options.onStatement);
     // Name resolution already reported unknown names; evaluation stays silent on them.
     problems.push(...outcome.problems);
-    return { text, problems: sortProblems(problems), results: outcome.results, references, evaluated: true };
+    return {
+      text,
+      problems: sortProblems(problems),
+      results: outcome.results,
+      references,
+      evaluated: true,
+      convention: conventionSentence(outcome.convention),
+      syntax: facts,
+    };
   } catch (err) {
     // A defect of ours must not take the editor down: report it on the whole text.
     const message = err instanceof Error ? err.message : String(err);

@@ -8,6 +8,7 @@ import type { Environment } from './environment.js';
 import type { Presented } from './present.js';
 import { formatPoint, formatTuple } from './text.js';
 import type { DirectionMomentValue, MatroidValue, MeetValue, PositivityValue } from './values.js';
+import { positivityImage } from './svg/value-images.js';
 
 const TOLERANCE_NOTE =
   'Exact answers computed from rounded measurements carry no tolerance: verify them with your own methods and the codes and practice that apply.';
@@ -50,6 +51,7 @@ export function presentPositivity(env: Environment, p: PositivityValue): Present
   const k = p.subspace.basis.length;
   const symbol = (s: number) => (s > 0 ? '+' : s < 0 ? '−' : '0');
   const pattern = p.signs.map((s, i) => `${env.labels.label(unrankLex(i, n, k), n)}:${symbol(s)}`).join(' ');
+  const image = positivityImage(env, p);
   const verdict = p.totallyPositive ? 'totally positive' : p.totallyNonnegative ? 'totally nonnegative (not totally positive)' : 'not totally nonnegative';
   return {
     summary: `${verdict} · signs ${p.signs.map(symbol).join('')}`,
@@ -58,6 +60,7 @@ export function presentPositivity(env: Environment, p: PositivityValue): Present
       '',
       '```text\n' + pattern + '\n```',
       '',
+      ...(image ? [image, ''] : []),
       conventionSentence(env.convention),
     ].join('\n'),
     latex: `\\operatorname{sign} = (${p.signs.map((s) => (s > 0 ? '+' : s < 0 ? '-' : '0')).join(',')})`,

@@ -12,6 +12,7 @@ import { matrixLatex, nameLatex } from './latex.js';
 import type { Presented } from './present.js';
 import { formatMatrix, formatMatrixInline, formatTuple } from './text.js';
 import type { CompoundValue, FlagValue, MapValue, QuotientValue, Scalar, SchubertValue } from './values.js';
+import { schubertImage } from './svg/value-images.js';
 
 function codeBlock(text: string): string {
   return '```text\n' + text + '\n```';
@@ -69,11 +70,13 @@ export function presentSchubert(env: Environment, c: SchubertValue): Presented {
   const jumps = c.jumps.map((j) => env.labels.position(j));
   const lambda = `(${c.partition.join(', ')})`;
   const conditions = c.conditions.map((d, i) => `dim(W ∩ F${i + 1}) = ${d}`).join('\n');
+  const diagram = schubertImage(c);
   return {
     summary: `Schubert cell λ = ${lambda} · codim ${c.codimension} · dim ${c.cellDimension} in G(${k},${n}) · jumps ${jumps.join(', ')}`,
     hover: [
       `The Schubert cell of the subspace relative to ${c.flag.origin === 'vectors' ? 'the given flag' : `the ${c.flag.origin} flag`}: partition λ = ${lambda} in the ${k}×${n - k} box, codimension |λ| = ${c.codimension}, cell dimension ${c.cellDimension}; the flag positions where dim(W ∩ F_i) grows are ${jumps.join(', ')}.`,
       '',
+      ...(diagram ? [diagram, ''] : []),
       '**Schubert conditions**:',
       codeBlock(conditions),
       '**Basis adapted to the flag**:',

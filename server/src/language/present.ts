@@ -17,6 +17,12 @@ import { formatCombination, formatMatrix, formatMatrixInline, formatMultivector,
 import { presentDirectionMoment, presentMatroid, presentMeet, presentPositivity } from './present-combinatorics.js';
 import { presentCompound, presentFlag, presentMap, presentQuotient, presentSchubert } from './present-geometry.js';
 import type { ChartValue, MultivectorValue, Scalar, SpaceInfo, SubspaceValue, Value, VectorValue } from './values.js';
+import { basisImage, chartImage, pointPatternImage } from './svg/value-images.js';
+
+/** A picture as a paragraph of its own, or nothing when the value is past the legible sizes. */
+function picture(markdown: string | undefined): string[] {
+  return markdown ? ['', markdown] : [];
+}
 
 export interface Presented {
   summary: string;
@@ -127,6 +133,7 @@ export function presentSubspace(env: Environment, w: SubspaceValue, lexPlucker: 
       `**Plücker coordinates** (${count} = C(${n},${k}), minors of ${source}):`,
       codeBlock(labelledList(env, point, point.raw, HOVER_COORDINATES)),
       `**Projective point** (${point.applied}): ${hoverPoint(env, point.normalized)}`,
+      ...picture(pointPatternImage(env, point)),
     );
     summary += ` · ${shortPoint(env, point.normalized)} (${point.applied})`;
     json.plucker = {
@@ -142,6 +149,7 @@ export function presentSubspace(env: Environment, w: SubspaceValue, lexPlucker: 
     '',
     `**Reduced basis** (as ${layoutWords(env)}, reduced row echelon form):`,
     codeBlock(k ? matrixText(env, w.basis) : '(the zero subspace)'),
+    ...picture(basisImage(env, w.basis, 'Reduced basis')),
   );
   lines.push('', conventionSentence(env.convention, applied));
   json.convention = conventionJson(env.convention, applied);
@@ -240,7 +248,7 @@ export function presentMultivector(env: Environment, v: MultivectorValue): Prese
     } else {
       summary = 'zero';
     }
-    if (point) lines.push('', `**Projective point** (${point.applied}): ${hoverPoint(env, point.normalized)}`);
+    if (point) lines.push('', `**Projective point** (${point.applied}): ${hoverPoint(env, point.normalized)}`, ...picture(pointPatternImage(env, point)));
   }
   lines.push('', conventionSentence(env.convention, applied));
   json.convention = conventionJson(env.convention, applied);
@@ -263,6 +271,7 @@ export function presentChart(env: Environment, c: ChartValue): Presented {
       `The affine chart of G(${k},${n}) where ${name} ≠ 0: the unique basis with the identity in columns ${chartColumns}.`,
       '',
       codeBlock(matrixText(env, c.full)),
+      ...picture(chartImage(env, c)),
       '',
       `Chart coordinates Y (${k}×${n - k} = ${k * (n - k)} free entries, columns ${others}):`,
       codeBlock(matrixText(env, c.block)),

@@ -11,7 +11,7 @@ import { NotPrimeError } from '../engine/prime-field.js';
 import { fromVector, isZeroMV } from '../engine/multivector.js';
 import type { ClaimStmt, DeclStmt, FieldStmt, FlagStmt, Ident, MapStmt, Program, ShowStmt, SpaceStmt } from './ast.js';
 import { flagFromVectors } from './geometry.js';
-import { checkClaim } from './claims.js';
+import { checkClaim, shortTitle } from './claims.js';
 import { conventionSentence, defaultBasisNames, Labels, type Convention, type FileConvention } from './conventions.js';
 import type { Environment } from './environment.js';
 import { evaluate } from './expressions.js';
@@ -23,6 +23,8 @@ import { describeValue, type SpaceInfo, type Value } from './values.js';
 export interface ProgramOutcome {
   results: Result[];
   problems: Problem[];
+  /** The convention the results are stated in, field included. */
+  convention: Convention;
 }
 
 function result(kind: ResultKind, span: Span, anchor: Span, title: string, p: Presented, name?: string): Result {
@@ -101,8 +103,9 @@ class ProgramEvaluator {
     readonly source: string,
   ) {}
 
-  run(program: Program): void {
+  run(program: Program, onStatement?: (span: Span) => void): void {
     for (const s of program.statements) {
+      onStatement?.(s.span);
       try {
         this.statement(s);
       } catch (err) {
@@ -242,11 +245,13 @@ class ProgramEvaluator {
     const outcome = checkClaim(this.env, this.source, s);
     const summary = outcome.holds ? `✓ holds: ${outcome.found}` : `✗ false: ${outcome.found}`;
     if (!outcome.holds) {
+      const r = outcome.replacement;
       this.env.problems.push({
         code: outcome.code,
         severity: 'error',
         message: `the claim '${outcome.claimed}' is false: ${outcome.found}`,
         span: s.span,
+        ...(r ? { fixes: [{ title: `Replace with the computed value ${shortTitle(r.newText)}`, edits: [r], preferred: true }] } : {}),
       });
     }
     const hover = [
@@ -314,7 +319,13 @@ function internalProblem(err: unknown, span: Span): Problem {
   };
 }
 
-export function evaluateProgram(program: Program, source: string, fileConvention: FileConvention, limits: Limits): ProgramOutcome {
+export function evaluateProgram(
+  program: Program,
+  source: string,
+  fileConvention: FileConvention,
+  limits: Limits,
+  onStatement?: (span: Span) => void,
+): ProgramOutcome {
   const problems: Problem[] = [];
   const { field } = chooseField(program, problems);
   const convention: Convention = { field, ...fileConvention };
@@ -334,6 +345,6 @@ export function evaluateProgram(program: Program, source: string, fileConvention
     env.bindings.set(generator.name, { value: { t: 'scalar', value: generatorElement.call(field) }, declSpan: generator.span, nameSpan: generator.span });
   }
   const evaluator = new ProgramEvaluator(env, source);
-  evaluator.run(program);
-  return { results: evaluator.results, problems };
+  evaluator.run(program, onStatement);
+  return { results: evaluator.results, problems, convention };
 }

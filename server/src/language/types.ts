@@ -6,6 +6,9 @@
  * columns appear only at the edges (the LSP conversion module and the CLI).
  */
 
+import type { Program } from './ast.js';
+import type { Reference, SymbolInfo } from './scope.js';
+
 /** A half-open range [start, end) of UTF-16 offsets into the document. */
 export interface Span {
   start: number;
@@ -27,6 +30,26 @@ export interface Problem {
   span: Span;
   /** Other places involved, e.g. the declaration of a vector that turned out dependent. */
   related?: RelatedSpan[];
+  /**
+   * Edits that would remove the problem (a false claim's computed value, a
+   * dependent vector dropped), offered to the user as quick fixes. Their spans
+   * index the text the problem was found in; nothing applies them but the user.
+   */
+  fixes?: Fix[];
+}
+
+/** Replace the text of `span` by `newText` (an empty span inserts). */
+export interface TextEdit {
+  span: Span;
+  newText: string;
+}
+
+/** One way to change the text, with a title for a menu; its edits never overlap. */
+export interface Fix {
+  title: string;
+  edits: TextEdit[];
+  /** The fix an editor may apply from its "auto fix" shortcut. */
+  preferred?: boolean;
 }
 
 export interface RelatedSpan {
@@ -54,6 +77,12 @@ export interface AnalyzeOptions {
   layout?: 'rows' | 'columns';
   /** Bounds that turn a runaway computation into a `limit/…` problem. */
   limits?: Partial<Limits>;
+  /**
+   * Called with each statement's span just before the statement is evaluated, so that a caller
+   * running the evaluation elsewhere (the server runs it in a worker thread) can tell where a long
+   * evaluation is when it has to stop it. Must not throw.
+   */
+  onStatement?: (span: Span) => void;
 }
 
 export interface Limits {
@@ -112,6 +141,30 @@ export interface Analysis {
   evaluated: boolean;
   /** Every use of a declared name, so a hover on a use can show the declaration's result. */
   references: NameUse[];
+  /** The file's convention in one sentence (present when evaluated), e.g. for the header of a LaTeX export. */
+  convention?: string;
+  /**
+   * What parsing and name resolution found, for the editor features of `./services/` (completion,
+   * outline, rename, colouring, formatting). Filled in by `analyze` with and without evaluation, so
+   * those features work from the quick pass while the user types. Absent only when the analysis
+   * failed internally. Its spans index into `text`; an analysis carried through later edits leaves
+   * it out, since nothing in it is moved along.
+   */
+  syntax?: SyntaxFacts;
+}
+
+/** The syntax tree and the name resolution of a document (see `Analysis.syntax`). */
+export interface SyntaxFacts {
+  /** The statements that parsed, in source order, and the ones dropped for a syntax error. */
+  program: Program;
+  /**
+   * Every declared name in declaration order: spaces, their basis vectors (a space declared without a
+   * `basis` list gets the default names, whose `nameSpan` is the space's name), vectors, subspaces,
+   * multivectors, maps, flags and a field's generator.
+   */
+  symbols: SymbolInfo[];
+  /** Every resolved use of a name, with the declaration it refers to (one of `symbols`). */
+  uses: Reference[];
 }
 
 /** A use of a name, resolved to what it names. */
@@ -134,4 +187,18 @@ export interface Lens {
   latex: string;
   /** The name of the result, if any, for commands that refer to it. */
   name?: string;
+}
+
+/**
+ * A change the editor may offer at a place: a problem's fix (`fix`), a
+ * rewrite of the text there (`rewrite`, e.g. a basis as its reduced basis) or
+ * an addition (`insert`, e.g. a `show` line for a declaration).
+ */
+export interface EditAction {
+  title: string;
+  kind: 'fix' | 'rewrite' | 'insert';
+  edits: TextEdit[];
+  preferred?: boolean;
+  /** For a fix: the problem it removes. */
+  problem?: Problem;
 }

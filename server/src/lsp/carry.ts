@@ -115,5 +115,7 @@ export function carryAnalysis(analysis: Analysis, edit: Edit, newText: string): 
     const span = carrySpan(use.span, edit, newText);
     if (span) references.push({ ...use, span });
   }
-  return { ...analysis, text: newText, problems, results, references };
+  // The syntax facts (tree, symbols, uses) are not moved along: they describe the evaluated text only.
+  const { syntax: _notCarried, ...rest } = analysis;
+  return { ...rest, text: newText, problems, results, references };
 }

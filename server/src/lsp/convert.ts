@@ -15,6 +15,15 @@ import {
   type Range,
 } from 'vscode-languageserver';
 import type { Hover, Lens, Problem, Severity, Span } from '../language/index.js';
+import type { Fold, OutlineEntry, SemanticToken, TextEdit as SpanEdit } from '../language/index.js';
+import {
+  FoldingRangeKind,
+  type DocumentSymbol,
+  type FoldingRange,
+  type Location,
+  type SymbolKind,
+  type TextEdit,
+} from 'vscode-languageserver';
 
 /** The client-side command a lens runs; its arguments are `[latex, name]`. */
 export const COPY_LATEX_COMMAND = 'wedgework.copyLatex';
@@ -84,4 +93,71 @@ export function toCodeLens(document: TextDocument, lens: Lens): CodeLens {
       arguments: [lens.latex, lens.name ?? null],
     },
   };
+}
+
+// ---- Editor features (./features.ts): spans of the language services as LSP locations, edits, folds,
+// outline entries and semantic tokens.
+
+export function toLocation(document: TextDocument, span: Span): Location {
+  return { uri: document.uri, range: toRange(document, span) };
+}
+
+export function toTextEdit(document: TextDocument, edit: SpanEdit): TextEdit {
+  return { range: toRange(document, edit.span), newText: edit.newText };
+}
+
+/** A fold over whole lines; undefined when the span lies on one line (nothing to fold). */
+export function toFoldingRange(document: TextDocument, fold: Fold): FoldingRange | undefined {
+  const { start, end } = toRange(document, fold.span);
+  if (end.line <= start.line) return undefined;
+  return {
+    startLine: start.line,
+    endLine: end.line,
+    kind: fold.kind === 'comment' ? FoldingRangeKind.Comment : FoldingRangeKind.Region,
+  };
+}
+
+export function toDocumentSymbol(
+  document: TextDocument,
+  entry: OutlineEntry,
+  kindOf: (kind: OutlineEntry['kind']) => SymbolKind,
+): DocumentSymbol {
+  return {
+    name: entry.name.length > 0 ? entry.name : entry.kind,
+    detail: entry.detail,
+    kind: kindOf(entry.kind),
+    range: toRange(document, entry.span),
+    selectionRange: toRange(document, entry.selection),
+    children: entry.children.map((c) => toDocumentSymbol(document, c, kindOf)),
+  };
+}
+
+/**
+ * Semantic tokens in the protocol's relative encoding: five numbers per token
+ * (line delta, start delta on the same line or start on a new line, length,
+ * type index, modifier bit set). Each token lies on one line (names do).
+ */
+export function encodeSemanticTokens(
+  document: TextDocument,
+  tokens: readonly SemanticToken[],
+  typeIndex: (type: SemanticToken['type']) => number,
+  modifierBits: (modifiers: SemanticToken['modifiers']) => number,
+): number[] {
+  const data: number[] = [];
+  let line = 0;
+  let character = 0;
+  for (const token of tokens) {
+    const { start, end } = toRange(document, token.span);
+    if (end.line !== start.line || end.character <= start.character) continue;
+    data.push(
+      start.line - line,
+      start.line === line ? start.character - character : start.character,
+      end.character - start.character,
+      typeIndex(token.type),
+      modifierBits(token.modifiers),
+    );
+    line = start.line;
+    character = start.character;
+  }
+  return data;
 }

@@ -2,14 +2,24 @@
  * The language server: LSP events in, the language facade's analyses out.
  *
  * Behaviour:
- * - open and save: full evaluation (`analyze(text, { evaluate: true, normalization })`), diagnostics pushed;
+ * - open and save: full evaluation (`analyze(text, { evaluate: true, normalization, limits })`) on a
+ *   worker thread (./evaluation-scheduler.ts), diagnostics pushed when it ends. Meanwhile the main
+ *   thread keeps answering hovers, lenses and the quick pass from the last results. A newer
+ *   evaluation of a document replaces a running one (its thread is terminated); one that runs past
+ *   `wedgework.limits.timeoutMs` is stopped with a `limit/timeout` problem on the statement it was
+ *   on. An evaluation still running after ~500 ms shows work-done progress (cancellable, naming the
+ *   statement being evaluated) and publishes the quick pass's problems so far;
  * - change, with `wedgework.evaluateOn` = 'save' (default): the quick pass
  *   (`evaluate: false`) ~150 ms after typing pauses, diagnostics pushed as
  *   described in ./documents.ts; hovers and lenses keep answering from the
  *   last evaluation, carried through the edits;
- * - change, with `wedgework.evaluateOn` = 'type': full evaluation ~300 ms after typing pauses;
+ * - change, with `wedgework.evaluateOn` = 'type': the running evaluation is cancelled and a full
+ *   evaluation starts ~300 ms after typing pauses; with 'save', a running evaluation goes on and its
+ *   results are carried through the edits made meanwhile;
  * - configuration change: every open document is evaluated again;
  * - after every evaluation: the client is asked to refresh its code lenses, if it supports that;
+ * - with every diagnostics update: the document's results (`wedgework/results`, ./results-protocol.ts)
+ *   to clients that asked for them, for the results view;
  * - close: its diagnostics are cleared.
  *
  * Every handler is guarded: an exception is logged to the client's output and
@@ -26,12 +36,23 @@ import {
   type InitializeResult,
   type ServerCapabilities,
 } from 'vscode-languageserver';
+import { availableParallelism } from 'node:os';
+import { join } from 'node:path';
 import packageJson from '../../../package.json' with { type: 'json' };
 import { analyze, hoverAt, lensesFor } from '../language/index.js';
+import { SYSTEM_CLOCK } from './clock.js';
 import { Debouncer } from './debounce.js';
 import { analysisForQueries, DocumentStore, evaluationIsCurrent, problemsToShow, type OpenDocument } from './documents.js';
 import { toCodeLens, toDiagnostic, toHover } from './convert.js';
+import { ACTION_CAPABILITIES, registerActions } from './actions.js';
+import { FEATURE_CAPABILITIES, registerFeatures } from './features.js';
+import { statementMessage, unfinishedEvaluationProblem } from './evaluation-problems.js';
+import { EvaluationScheduler, type EvaluationOutcome } from './evaluation-scheduler.js';
+import { DelayedProgress } from './progress.js';
+import { resultItems } from './results-items.js';
+import { RESULTS_CAPABILITY, RESULTS_NOTIFICATION, type ResultsParams } from './results-protocol.js';
 import { DEFAULT_SETTINGS, parseSettings, type Settings } from './settings.js';
+import { threadWorkerFactory, WorkerPool } from './worker-pool.js';
 
 /** Delay after the last keystroke before the quick (syntax and names) pass. */
 export const QUICK_PASS_DELAY_MS = 150;
@@ -39,6 +60,33 @@ export const QUICK_PASS_DELAY_MS = 150;
 export const EVALUATE_WHILE_TYPING_DELAY_MS = 300;
 
 const CONFIGURATION_SECTION = 'wedgework';
+
+export interface ServerOptions {
+  /** The bundled evaluation worker; by default `evaluation-worker.cjs` beside the server bundle. */
+  evaluationWorkerFile?: string;
+  /** How many documents are evaluated at once; by default one per spare processor, at most four. */
+  maxConcurrentEvaluations?: number;
+}
+
+function defaultWorkerFile(): string {
+  // The server runs as the CommonJS bundle dist/server.cjs, where `__dirname` is dist/.
+  return join(__dirname, 'evaluation-worker.cjs');
+}
+
+function defaultConcurrency(): number {
+  return Math.max(1, Math.min(4, availableParallelism() - 1));
+}
+
+/** The file name at the end of a URI, for messages (`Evaluating three-planes.wedge…`). */
+function fileNameOf(uri: string): string {
+  const path = uri.replace(/[?#].*$/, '');
+  const name = path.slice(path.lastIndexOf('/') + 1);
+  try {
+    return decodeURIComponent(name) || uri;
+  } catch {
+    return name || uri;
+  }
+}
 
 export const SERVER_CAPABILITIES: ServerCapabilities = {
   textDocumentSync: {
@@ -48,6 +96,10 @@ export const SERVER_CAPABILITIES: ServerCapabilities = {
   },
   hoverProvider: true,
   codeLensProvider: { resolveProvider: false },
+  // Code actions and the LaTeX export command (./actions.ts).
+  ...ACTION_CAPABILITIES,
+  // Completion, signature help, navigation, rename, outline, semantic tokens, folding, formatting (./features.ts).
+  ...FEATURE_CAPABILITIES,
 };
 
 function describeError(error: unknown): string {
@@ -55,9 +107,13 @@ function describeError(error: unknown): string {
   return String(error);
 }
 
-export function startServer(connection: Connection): void {
+export function startServer(connection: Connection, options: ServerOptions = {}): void {
   const documents = new DocumentStore();
   const timers = new Debouncer();
+  const workers = new WorkerPool(threadWorkerFactory(options.evaluationWorkerFile ?? defaultWorkerFile()));
+  const evaluations = new EvaluationScheduler(workers, options.maxConcurrentEvaluations ?? defaultConcurrency());
+  /** Whether the client shows a results view (and so wants `wedgework/results`). */
+  let clientWantsResults = false;
   /** Per-URI settings, asked of the client once and forgotten on configuration change. */
   const settingsByUri = new Map<string, Promise<Settings>>();
   let clientHasConfiguration = false;
@@ -106,22 +162,55 @@ export function startServer(connection: Connection): void {
     return settings;
   }
 
+  function sendResults(params: ResultsParams): void {
+    if (!clientWantsResults) return;
+    void connection
+      .sendNotification(RESULTS_NOTIFICATION, params)
+      .catch((error: unknown) => logFailure('sending the results', error));
+  }
+
   function publish(entry: OpenDocument): void {
     const { document } = entry;
     const diagnostics = problemsToShow(entry).map((p) => toDiagnostic(document, p));
     void connection
       .sendDiagnostics({ uri: document.uri, version: document.version, diagnostics })
       .catch((error: unknown) => logFailure('sending diagnostics', error));
+    sendResults({
+      uri: document.uri,
+      version: document.version,
+      ...(entry.evaluation ? { evaluatedVersion: entry.evaluation.version } : {}),
+      results: resultItems(document, entry.evaluation?.analysis),
+    });
   }
 
   const quickKey = (uri: string) => `quick ${uri}`;
   const evaluateKey = (uri: string) => `evaluate ${uri}`;
+
+  /** Runs the quick pass of the current version unless it (or an evaluation of it) is already there. */
+  function ensureQuickPass(entry: OpenDocument): void {
+    if (evaluationIsCurrent(entry) || entry.quick?.version === entry.document.version) return;
+    documents.recordQuick(entry, analyze(entry.document.getText(), { evaluate: false }));
+  }
 
   function runQuickPass(uri: string): void {
     const entry = documents.get(uri);
     if (!entry || evaluationIsCurrent(entry)) return;
     documents.recordQuick(entry, analyze(entry.document.getText(), { evaluate: false }));
     publish(entry);
+  }
+
+  function logOutcome(uri: string, version: number, outcome: EvaluationOutcome): void {
+    const what = `evaluation of ${fileNameOf(uri)} (version ${version})`;
+    if (outcome.status === 'cancelled') {
+      connection.console.log(`Wedgework: ${what} cancelled: the document changed, closed or is evaluated again`);
+    } else if (outcome.status === 'stopped') {
+      const why = outcome.reason === 'timeout' ? 'it reached wedgework.limits.timeoutMs' : 'cancelled by the user';
+      connection.console.log(`Wedgework: ${what} stopped after ${Math.round(outcome.elapsedMs)} ms: ${why}`);
+    } else if (outcome.status === 'failed') {
+      connection.console.error(`Wedgework: ${what} failed: ${outcome.message}`);
+    } else if (outcome.elapsedMs >= 500) {
+      connection.console.log(`Wedgework: ${what} took ${Math.round(outcome.elapsedMs)} ms`);
+    }
   }
 
   async function evaluate(uri: string): Promise<void> {
@@ -131,14 +220,47 @@ export function startServer(connection: Connection): void {
     // Read the document only now: it may have changed (or closed) while the settings were fetched.
     const entry = documents.get(uri);
     if (!entry) return;
-    const analysis = analyze(entry.document.getText(), {
-      evaluate: true,
-      normalization: settings.normalization,
-      order: settings.indexOrder,
-      firstLabel: settings.firstLabel,
-      layout: settings.layout,
+    const text = entry.document.getText();
+    const { timeoutMs, maxCoordinates } = settings.limits;
+    const progress = new DelayedProgress({
+      title: `Evaluating ${fileNameOf(uri)}…`,
+      create: () => connection.window.createWorkDoneProgress(),
+      clock: SYSTEM_CLOCK,
+      onCancel: () => evaluations.stop(uri),
+      // A long evaluation: show the syntax and name problems of the current text without waiting for it.
+      onShown: () => {
+        if (documents.get(uri) !== entry) return;
+        ensureQuickPass(entry);
+        publish(entry);
+      },
     });
-    documents.recordEvaluation(entry, analysis);
+    // The ticket and the run start together, so that no edit falls between the two.
+    const ticket = documents.beginEvaluation(entry);
+    const outcome = await evaluations.run(uri, {
+      text,
+      options: {
+        normalization: settings.normalization,
+        order: settings.indexOrder,
+        firstLabel: settings.firstLabel,
+        layout: settings.layout,
+        limits: { maxCoordinates },
+      },
+      timeoutMs,
+      onStart: () => progress.start(),
+      onStatement: (span) => progress.message(() => statementMessage(text, span)),
+    });
+    progress.end();
+    logOutcome(uri, ticket.version, outcome);
+    if (outcome.status === 'cancelled' || documents.get(uri) !== entry) {
+      documents.abandonEvaluation(entry, ticket);
+      return;
+    }
+    if (outcome.status === 'finished') {
+      documents.recordEvaluation(entry, outcome.analysis, ticket);
+    } else {
+      documents.recordStopped(entry, text, unfinishedEvaluationProblem(outcome, text, timeoutMs)!, ticket);
+    }
+    ensureQuickPass(entry);
     publish(entry);
     // The editor asks for lenses when the text changes, not when an evaluation finishes: after a save
     // (same text, new results) or an evaluation slower than the editor's first request, it would keep
@@ -159,7 +281,10 @@ export function startServer(connection: Connection): void {
       clientHasConfiguration = workspace?.configuration === true;
       clientRegistersConfigurationChange = workspace?.didChangeConfiguration?.dynamicRegistration === true;
       clientRefreshesCodeLenses = workspace?.codeLens?.refreshSupport === true;
+      clientWantsResults = params.capabilities.experimental?.[RESULTS_CAPABILITY] === true;
       pushedSettings = parseSettings(params.initializationOptions);
+      // Load the language layer into a worker now, so the first evaluation does not wait for it.
+      workers.warm();
       const result: InitializeResult = {
         capabilities: SERVER_CAPABILITIES,
         serverInfo: { name: 'wedgework', version: packageJson.version },
@@ -205,6 +330,8 @@ export function startServer(connection: Connection): void {
       const settings = await settingsFor(uri);
       if (!documents.get(uri)) return;
       if (settings.evaluateOn === 'type') {
+        // Its results would be replaced within moments; the thread is better spent on the new text.
+        evaluations.cancel(uri);
         timers.schedule(evaluateKey(uri), EVALUATE_WHILE_TYPING_DELAY_MS, () => void evaluateGuarded(uri));
       } else {
         timers.schedule(quickKey(uri), QUICK_PASS_DELAY_MS, () => void quickPassGuarded(uri));
@@ -223,11 +350,14 @@ export function startServer(connection: Connection): void {
       const { uri } = textDocument;
       timers.cancel(quickKey(uri));
       timers.cancel(evaluateKey(uri));
+      evaluations.cancel(uri);
+      const lastVersion = documents.get(uri)?.document.version ?? 0;
       documents.close(uri);
       settingsByUri.delete(uri);
       void connection
         .sendDiagnostics({ uri, diagnostics: [] })
         .catch((error: unknown) => logFailure('clearing diagnostics', error));
+      sendResults({ uri, version: lastVersion, results: [] });
     }),
   );
 
@@ -250,9 +380,28 @@ export function startServer(connection: Connection): void {
     }),
   );
 
+  // Quick fixes, rewrites and the LaTeX export (./actions.ts).
+  registerActions(connection, {
+    document: (uri) => {
+      const entry = documents.get(uri);
+      return entry && { document: entry.document, analysis: analysisForQueries(entry), current: evaluationIsCurrent(entry) };
+    },
+    evaluation: async (uri) => {
+      if (documents.get(uri) && !evaluationIsCurrent(documents.get(uri)!)) await evaluateGuarded(uri);
+      const entry = documents.get(uri);
+      return entry && evaluationIsCurrent(entry) ? entry.evaluation!.analysis : undefined;
+    },
+    guard,
+  });
+
+  // Completion, signature help, navigation, rename, outline, semantic tokens, folding, formatting (./features.ts).
+  registerFeatures(connection, { document: (uri) => documents.get(uri)?.document, settings: settingsFor });
+
   connection.onShutdown(
     guard('shutting down', undefined, () => {
       timers.cancelAll();
+      evaluations.cancelAll();
+      workers.dispose();
     }),
   );
 

@@ -1,0 +1,94 @@
+/**
+ * Plücker coordinates over the rationals by fraction-free elimination on
+ * bigints: the walk of plucker-walk.ts with Bareiss updates.
+ *
+ * The rows are first cleared of denominators (scaling row i by the lcm of its
+ * denominators multiplies every maximal minor by it). After d pivots each
+ * entry is itself a (d+1)×(d+1) minor of the integer matrix (Sylvester's
+ * identity), so every division below is exact and no fraction arises; each
+ * result is divided by the product of the row scales at the end.
+ *
+ * This is the path for matrices whose minors are too large for the modular
+ * path of plucker-multimodular.ts to pay off, and the reference that path is
+ * tested against.
+ */
+import { walkColumnSets } from './plucker-walk.js';
+import { QQ, lcmBigInt, type Rational } from './rational.js';
+import { binomial } from './subsets.js';
+
+/** How much bigint arithmetic one run did, per depth of the walk, for the benchmarks' arithmetic floor. */
+export interface FractionFreeCounts {
+  /** updates[d]: entry updates (a·b − c·d, divided by the previous pivot below depth 1) made at depth d. */
+  updates: number[];
+  /** pivotBits[d], previousBits[d]: the bit lengths of the pivots and previous pivots, summed over those updates. */
+  pivotBits: number[];
+  previousBits: number[];
+}
+
+function bitLength(x: bigint): number {
+  return x === 0n ? 0 : (x < 0n ? -x : x).toString(16).length * 4;
+}
+
+interface BareissState {
+  negative: boolean;
+  previous: bigint;
+}
+
+/** The rows times the lcm of their denominators, and the product of those lcms. */
+export function clearDenominators(rows: readonly (readonly Rational[])[]): { integers: bigint[][]; scale: bigint } {
+  let scale = 1n;
+  const integers = rows.map((row) => {
+    const l = row.reduce((acc, x) => lcmBigInt(acc, x.den), 1n);
+    scale *= l;
+    return row.map((x) => (x.num * l) / x.den);
+  });
+  return { integers, scale };
+}
+
+/** All C(n, k) maximal minors of the rational k×n matrix `rows` (k ≥ 1), by fraction-free elimination. */
+export function pluckerFractionFree(
+  rows: readonly (readonly Rational[])[],
+  n: number,
+  counts?: FractionFreeCounts,
+): Rational[] {
+  const k = rows.length;
+  const out = new Array<Rational>(binomial(n, k)).fill(QQ.zero);
+  const { integers, scale } = clearDenominators(rows);
+  let index = 0;
+  walkColumnSets<bigint, BareissState>(k, n, integers, { negative: false, previous: 1n }, {
+    isZero: (e) => e === 0n,
+    eliminate(level, count, q, c, width, state, next) {
+      const pivotRow = level[q]!;
+      const pivot = pivotRow[c]!;
+      const previous = state.previous;
+      if (counts !== undefined) {
+        const d = k - count;
+        const updates = (count - 1) * (width - 1 - c);
+        counts.updates[d] = (counts.updates[d] ?? 0) + updates;
+        counts.pivotBits[d] = (counts.pivotBits[d] ?? 0) + updates * bitLength(pivot);
+        counts.previousBits[d] = (counts.previousBits[d] ?? 0) + updates * bitLength(previous);
+      }
+      let t = 0;
+      for (let i = 0; i < count; i++) {
+        if (i === q) continue;
+        const row = level[i]!;
+        const target = next[t++]!;
+        const factor = row[c]!;
+        // Sylvester's identity makes each quotient exact: the result is a minor of the integer matrix.
+        if (previous === 1n) {
+          for (let j = c + 1; j < width; j++) target[j] = pivot * row[j]! - factor * pivotRow[j]!;
+        } else {
+          for (let j = c + 1; j < width; j++) target[j] = (pivot * row[j]! - factor * pivotRow[j]!) / previous;
+        }
+      }
+      return { negative: q % 2 === 0 ? state.negative : !state.negative, previous: pivot };
+    },
+    leaf(state, entry) {
+      out[index++] = QQ.fromRational(state.negative ? -entry : entry, scale);
+    },
+    zeros(count) {
+      index += count;
+    },
+  });
+  return out;
+}

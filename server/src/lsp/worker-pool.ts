@@ -1,0 +1,122 @@
+/**
+ * Evaluation workers kept ready for use.
+ *
+ * Stopping an evaluation means terminating its thread, and a fresh thread
+ * needs a moment to load the language layer. So the pool keeps an idle,
+ * warmed-up worker at hand: after every `take`, if no idle worker is left, a
+ * new one starts loading in the background, and the next evaluation (for
+ * instance the one that replaces a stopped evaluation) starts on a warm
+ * thread. A worker that finished its job goes back to the pool; at most
+ * `MAX_IDLE_WORKERS` wait there, so a busy session does not pile up threads.
+ */
+import { Worker } from 'node:worker_threads';
+import type { EvaluationRequest, WorkerReply } from './evaluation-messages.js';
+
+/** Idle workers kept beyond this many are terminated when they come back. */
+export const MAX_IDLE_WORKERS = 2;
+
+export interface WorkerListener {
+  reply(reply: WorkerReply): void;
+  /** The thread ended by itself (a crash, or running out of memory); `error` says why when known. */
+  exit(error: Error | undefined): void;
+}
+
+/** One worker thread, as the pool and the scheduler see it. */
+export interface WorkerHandle {
+  post(request: EvaluationRequest): void;
+  /** Replaces the listener; `undefined` ignores the worker's messages from now on. */
+  listen(listener: WorkerListener | undefined): void;
+  /** Ends the thread at once, whatever it is doing. No `exit` is reported to the listener. */
+  terminate(): void;
+}
+
+export type WorkerFactory = () => WorkerHandle;
+
+export class WorkerPool {
+  private readonly idle: WorkerHandle[] = [];
+  private disposed = false;
+
+  constructor(private readonly create: WorkerFactory) {}
+
+  /** Makes sure one worker is idle (starting it if needed), so the first evaluation finds it loaded. */
+  warm(): void {
+    if (!this.disposed && this.idle.length === 0) this.addIdle(this.create());
+  }
+
+  /** A worker for one job: an idle one if any, else a new one. The caller listens to it. */
+  take(): WorkerHandle {
+    const worker = this.idle.pop() ?? this.create();
+    worker.listen(undefined);
+    this.warm();
+    return worker;
+  }
+
+  /** A worker whose job is over and which is still healthy. */
+  giveBack(worker: WorkerHandle): void {
+    if (this.disposed || this.idle.length >= MAX_IDLE_WORKERS) {
+      worker.listen(undefined);
+      worker.terminate();
+      return;
+    }
+    this.addIdle(worker);
+  }
+
+  /** A worker that must not run on: its job was stopped, or it failed. */
+  discard(worker: WorkerHandle): void {
+    worker.listen(undefined);
+    worker.terminate();
+    this.warm();
+  }
+
+  idleCount(): number {
+    return this.idle.length;
+  }
+
+  dispose(): void {
+    this.disposed = true;
+    for (const worker of this.idle.splice(0)) {
+      worker.listen(undefined);
+      worker.terminate();
+    }
+  }
+
+  private addIdle(worker: WorkerHandle): void {
+    // An idle worker that dies is simply forgotten; the next `take` starts another.
+    worker.listen({
+      reply: () => {},
+      exit: () => {
+        const at = this.idle.indexOf(worker);
+        if (at >= 0) this.idle.splice(at, 1);
+      },
+    });
+    this.idle.push(worker);
+  }
+}
+
+/** Workers as real threads running the bundled `file` (dist/evaluation-worker.cjs). */
+export function threadWorkerFactory(file: string): WorkerFactory {
+  return () => {
+    // The worker's standard output would otherwise share the server's, which may carry the protocol.
+    const worker = new Worker(file, { stdout: true });
+    worker.stdout.pipe(process.stderr);
+    // An idle worker must not keep the server process alive once the connection is gone.
+    worker.unref();
+    let listener: WorkerListener | undefined;
+    let failure: Error | undefined;
+    let terminated = false;
+    worker.on('message', (reply: WorkerReply) => listener?.reply(reply));
+    worker.on('error', (error) => (failure = error));
+    worker.on('exit', () => {
+      if (!terminated) listener?.exit(failure);
+    });
+    return {
+      post: (request) => worker.postMessage(request),
+      listen: (next) => (listener = next),
+      terminate: () => {
+        terminated = true;
+        listener = undefined;
+        void worker.terminate();
+      },
+    };
+  };
+}
