@@ -22,7 +22,7 @@
  */
 import type { Field } from './field.js';
 import { coordinatesIn, kernel, rref } from './matrix.js';
-import { coefficient, fromVector, sortedTerms, wedge, type Multivector } from './multivector.js';
+import { coefficient, fromVector, sortedTerms, wedge, type Multivector, type MultivectorTerm } from './multivector.js';
 import { primeField } from './prime-field.js';
 import { QQ, lcmBigInt, type Rational } from './rational.js';
 import { binomialBig, checkSubset, complement, forEachSubset, insertIndex, subsetKey } from './subsets.js';
@@ -73,7 +73,8 @@ function spanOfStream<T>(F: Field<T>, n: number, emit: (push: (row: T[]) => bool
   emit((row) => {
     if (basis.length === n) return false;
     buffer.push(row);
-    if (buffer.length >= BATCH_FACTOR * Math.max(n, 1)) flush();
+    // The first reduction comes after n rows, so that a stream of full rank stops as early as it can.
+    if (buffer.length >= (basis.length === 0 ? 1 : BATCH_FACTOR) * Math.max(n, 1)) flush();
     return basis.length < n;
   });
   flush();
@@ -88,13 +89,14 @@ function spanOfStream<T>(F: Field<T>, n: number, emit: (push: (row: T[]) => bool
 function emitDivisorRows<T, S>(
   F: Field<T>,
   mv: Multivector<T>,
+  terms: readonly MultivectorTerm<T>[],
   zero: S,
   image: (c: T) => S,
   push: (row: S[]) => boolean,
 ): void {
   const { n } = mv;
   const seen = new Set<string>();
-  for (const { subset } of sortedTerms(mv)) {
+  for (const { subset } of terms) {
     for (const i of complement(subset, n)) {
       const { sorted: J } = insertIndex(subset, i);
       const key = subsetKey(J);
@@ -121,11 +123,11 @@ const RANK_TEST_PRIME = 2n ** 31n - 1n;
  * D(ω) = 0 without any fraction arithmetic. A denominator divisible by p
  * makes the test inconclusive (false).
  */
-function fullRankModular(mv: Multivector<Rational>): boolean {
+function fullRankModular(mv: Multivector<Rational>, terms: readonly MultivectorTerm<Rational>[]): boolean {
   const Fp = primeField(RANK_TEST_PRIME) as Field<number>;
   let defined = true;
   const basis = spanOfStream(Fp, mv.n, (push) =>
-    emitDivisorRows(QQ, mv, 0, (c) => {
+    emitDivisorRows(QQ, mv, terms, 0, (c) => {
       if (c.den % RANK_TEST_PRIME === 0n) {
         defined = false;
         return 0;
@@ -147,9 +149,20 @@ function fullRankModular(mv: Multivector<Rational>): boolean {
  * test modulo a prime settles the common case D(ω) = 0 first.
  */
 export function divisorSpace<T>(F: Field<T>, mv: Multivector<T>): T[][] {
+  return divisorSpaceOf(F, mv, sortedTerms(mv));
+}
+
+/** `divisorSpace`, given the terms of ω in lexicographic order. */
+function divisorSpaceOf<T>(F: Field<T>, mv: Multivector<T>, terms: readonly MultivectorTerm<T>[]): T[][] {
   const { n } = mv;
-  if ((F as unknown) === QQ && mv.terms.size > 0 && fullRankModular(mv as unknown as Multivector<Rational>)) return [];
-  const reduced = spanOfStream(F, n, (push) => emitDivisorRows(F, mv, F.zero, (c) => c, push));
+  if (
+    (F as unknown) === QQ &&
+    terms.length > 0 &&
+    fullRankModular(mv as unknown as Multivector<Rational>, terms as unknown as MultivectorTerm<Rational>[])
+  ) {
+    return [];
+  }
+  const reduced = spanOfStream(F, n, (push) => emitDivisorRows(F, mv, terms, F.zero, (c) => c, push));
   return rref(F, kernel(F, reduced, n), n).rows;
 }
 
@@ -235,9 +248,13 @@ interface Contraction<T> {
  * is dropped first, so the first entry for e_0∧e_1 + … gives the textbook
  * relation. Cost: k map updates per term.
  */
-function contractionTable<T>(F: Field<T>, mv: Multivector<T>): Map<TableKey, Contraction<T>> {
+function contractionTable<T>(
+  F: Field<T>,
+  mv: Multivector<T>,
+  terms: readonly MultivectorTerm<T>[] = sortedTerms(mv),
+): Map<TableKey, Contraction<T>> {
   const table = new Map<TableKey, Contraction<T>>();
-  for (const { subset, coeff } of sortedTerms(mv)) {
+  for (const { subset, coeff } of terms) {
     const k = subset.length;
     const whole = mv.n <= MASK_LIMIT ? (tableKey(subset, mv.n) as number) : 0;
     for (let r = k - 1; r >= 0; r--) {
@@ -432,16 +449,17 @@ function chartTestOnIntegers(
  * coefficient there.
  */
 export function decompose<T>(F: Field<T>, mv: Multivector<T>): Decomposition<T> {
-  const first = sortedTerms(mv)[0];
+  const terms = sortedTerms(mv);
+  const first = terms[0];
   if (first === undefined) return { kind: 'zero' };
-  const table = contractionTable(F, mv);
+  const table = contractionTable(F, mv, terms);
   const rows = chartRowsIfDecomposable(F, mv, table, first.subset, first.coeff);
   if (rows !== undefined) {
     const basis = rref(F, rows, mv.n).rows;
     const pivots = basis.map((row) => row.findIndex((x) => !F.isZero(x)));
     return { kind: 'decomposable', basis, scalar: coefficient(F, mv, pivots) };
   }
-  const divisorBasis = divisorSpace(F, mv);
+  const divisorBasis = divisorSpaceOf(F, mv, terms);
   const relation = failedRelationIn(F, mv, table, divisorBasis);
   if (relation === undefined || divisorBasis.length >= mv.k) {
     // Unreachable by the arguments above; kept as a loud guard.

@@ -23,9 +23,9 @@ const LAYOUTS: [string, string[], string[]][] = [
     ['space V dim 4', 'vector p = (1, 0, 2, -1)', 'vector q = 3 e1 - e2 + 1/2 e4', 'claim dim (span(p, q) & span(e1)) = 1'],
   ],
   [
-    'a wedge is spaced, a power with a number exponent and a fraction of numbers stay tight',
-    ['field GF(9) generator w', 'space V dim 2', 'vector r = w ^ 2 e1 - 1 / 2 e2', 'multivector m = e1^e2'],
-    ['field GF(9) generator w', 'space V dim 2', 'vector r = w^2 e1 - 1/2 e2', 'multivector m = e1 ^ e2'],
+    'a wedge, a power with a number exponent and a fraction of numbers are written tight',
+    ['field GF(9) generator w', 'space V dim 2', 'vector r = w ^ 2 e1 - 1 / 2 e2', 'multivector m = e1 ^ e2'],
+    ['field GF(9) generator w', 'space V dim 2', 'vector r = w^2 e1 - 1/2 e2', 'multivector m = e1^e2'],
   ],
   [
     'a multi-line matrix: one row per line, right-aligned columns under the first entry',

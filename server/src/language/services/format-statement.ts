@@ -67,7 +67,8 @@ function readRoles(s: Statement, tokens: readonly IToken[]): Roles {
         noSpaceAfter.add(e.span.start);
         break;
       case 'binary':
-        if (!e.implicit && ((e.op === '/' && isNumber(e.left) && isNumber(e.right)) || (e.op === '^' && isNumber(e.right)))) {
+        // The wedge is written tight, as in print (e1^e2); so are numeric fractions (1/2) and powers (w^2).
+        if (!e.implicit && ((e.op === '/' && isNumber(e.left) && isNumber(e.right)) || e.op === '^')) {
           tight(e.opSpan.start);
         }
         break;
