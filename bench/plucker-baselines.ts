@@ -80,7 +80,7 @@ type Fraction = ReturnType<typeof math.fraction>;
 
 /** mathjs's own determinant of the columns `cols`, on its exact fractions. */
 export function mathjsMinor(fractions: readonly (readonly Fraction[])[], cols: readonly number[]): Fraction {
-  return math.det(fractions.map((row) => cols.map((c) => row[c]!))) as Fraction;
+  return math.det(fractions.map((row) => cols.map((c) => row[c]!))) as unknown as Fraction;
 }
 
 export function toFractions(rows: readonly (readonly bigint[])[]): Fraction[][] {

@@ -37,6 +37,19 @@ const SERVER = join(process.cwd(), 'dist', 'server.cjs');
 /** How long to wait for any one answer before counting it as lost. */
 const TIMEOUT_MS = 60_000;
 
+const CLIENT_REQUESTS = [
+  'window/workDoneProgress/create',
+  'window/showMessageRequest',
+  'window/showDocument',
+  'client/registerCapability',
+  'client/unregisterCapability',
+  'workspace/configuration',
+  'workspace/codeLens/refresh',
+  'workspace/semanticTokens/refresh',
+  'workspace/inlayHint/refresh',
+  'workspace/diagnostic/refresh',
+];
+
 interface Session {
   process: ChildProcess;
   connection: ProtocolConnection;
@@ -59,9 +72,8 @@ async function startSession(settings: Record<string, unknown>): Promise<{ sessio
       }
     }
   });
-  // Whatever else the server asks of its client (progress, registrations) is answered with nothing.
-  connection.onRequest(() => null);
-  connection.onNotification(() => undefined);
+  // What else a server may ask of its client (progress, registrations, refreshes) is answered with nothing.
+  for (const method of CLIENT_REQUESTS) connection.onRequest(method, () => null);
   connection.listen();
   await connection.sendRequest(InitializeRequest.type, {
     processId: process.pid,

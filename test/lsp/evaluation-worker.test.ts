@@ -99,10 +99,13 @@ describe('the bundled evaluation worker', { timeout: 60_000 }, () => {
     const busyReplies = inbox(busy);
     busy.post({ id: 1, text: HEAVY, options: {} });
     await busyReplies.next('ready');
-    const statement = await busyReplies.next('statement');
-    assert.equal(statement.id, 1);
-    // The spare made by `take` has had time to load while the busy worker started; wait until it is ready
-    // by asking it through the pool, as the server would after a cancellation.
+    // The busy worker is on the heavy statement (its second) once it reports it.
+    await busyReplies.next('statement');
+    const heavy = await busyReplies.next('statement');
+    assert.equal(heavy.id, 1);
+    assert.ok(HEAVY.slice(heavy.span.start, heavy.span.end).startsWith('subspace W'));
+    // The spare began loading when the busy worker was taken, so it has had as long to load as the busy
+    // one, which is evaluating already. Stop the busy one and hand the next job over, as the server does.
     const restartedAt = performance.now();
     pool.discard(busy);
     const spare = pool.take();

@@ -49,7 +49,7 @@ export function emptyModularWalkCounts(): ModularWalkCounts {
  * The leaves under a node with two rows a, b left (in m): σ·(a_c·b_j − a_j·b_c)
  * for from ≤ c < j < n, written from out[index] on. Returns the next index.
  */
-function pairLeaves(m: Int32Array, n: number, from: number, sigma: number, out: Int32Array, index: number, p: number, reciprocal: number): number {
+function pairLeaves(m: Int32Array, n: number, from: number, sigma: number, out: number[], index: number, p: number, reciprocal: number): number {
   for (let c = from; c <= n - 2; c++) {
     const a = m[c]!;
     const b = m[n + c]!;
@@ -85,7 +85,7 @@ function tripleLeaves(
   n: number,
   from: number,
   sigma: number,
-  out: Int32Array,
+  out: number[],
   index: number,
   p: number,
   reciprocal: number,
@@ -137,7 +137,7 @@ function quadrupleLeaves(
   n: number,
   from: number,
   sigma: number,
-  out: Int32Array,
+  out: number[],
   index: number,
   p: number,
   reciprocal: number,
@@ -256,6 +256,18 @@ function findAndInvertPivots(
 }
 
 /**
+ * An array of `count` zeros whose elements are stored as doubles from the
+ * start: residues need not be small integers, and an array that began with
+ * small integers would be converted when the first large one is written. The
+ * coordinates are returned in a plain array because that is what callers
+ * keep; copying them out of a typed array cost a third of the walk.
+ */
+function zeros(count: number): number[] {
+  const out = new Array<number>(count).fill(0.5);
+  return out.fill(0);
+}
+
+/**
  * All C(n, k) maximal minors modulo p of the k×n matrix `rows` (entries in
  * [0, p)), in lexicographic order of their column sets; p < 2^31 must be a
  * prime (pivots are inverted). `counts`, when given, is increased by the
@@ -269,10 +281,10 @@ export function pluckerModular(
   n: number,
   p: number,
   counts?: ModularWalkCounts,
-): Int32Array {
+): number[] {
   const k = rows.length;
-  if (k > n) return new Int32Array(0);
-  const out = new Int32Array(binomial(n, k));
+  if (k > n) return [];
+  const out = zeros(binomial(n, k));
   if (k === 0) {
     out[0] = 1;
     return out;

@@ -98,7 +98,7 @@ export function pluckerCoordinates<T>(F: Field<T>, basisRows: readonly (readonly
   const p = smallPrimeModulus(F);
   if (p !== undefined) {
     // Elements of these fields are the numbers in [0, p) themselves.
-    return Array.from(pluckerModular(basisRows as unknown as readonly (readonly number[])[], n, p)) as unknown as T[];
+    return pluckerModular(basisRows as unknown as readonly (readonly number[])[], n, p) as unknown as T[];
   }
   return pluckerOverField(F, basisRows, n);
 }

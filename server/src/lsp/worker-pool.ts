@@ -98,7 +98,7 @@ export function threadWorkerFactory(file: string): WorkerFactory {
   return () => {
     // The worker's standard output would otherwise share the server's, which may carry the protocol.
     const worker = new Worker(file, { stdout: true });
-    worker.stdout.pipe(process.stderr);
+    worker.stdout.on('data', (chunk: Buffer) => process.stderr.write(chunk));
     // An idle worker must not keep the server process alive once the connection is gone.
     worker.unref();
     let listener: WorkerListener | undefined;
