@@ -119,3 +119,34 @@ export function bigintHornerFloor(count: number, bits: number): () => bigint {
     return sink;
   };
 }
+
+/** One group of bigint dot products for `bigintProductFloor`. */
+export interface ProductGroup {
+  /** How many dot products. */
+  count: number;
+  /** Products per dot product. */
+  terms: number;
+  /** Mean bit lengths of the two factors of each product. */
+  xBits: number;
+  yBits: number;
+}
+
+/** A function that performs the counted bigint dot products once, on random bigints of the given sizes. */
+export function bigintProductFloor(groups: readonly ProductGroup[]): () => bigint {
+  const random = new Random(13);
+  const prepared = groups.map((g) => ({ ...g, x: bigints(g.xBits, BIG_BLOCK, random), y: bigints(g.yBits, BIG_BLOCK, random) }));
+  return () => {
+    let sink = 0n;
+    for (const { count, terms, x, y } of prepared) {
+      for (let left = count; left > 0; left -= BIG_BLOCK) {
+        const m = Math.min(left, BIG_BLOCK);
+        for (let i = 0; i < m; i++) {
+          let s = x[i]! * y[i]!;
+          for (let t = 1; t < terms; t++) s -= x[(i + t) % BIG_BLOCK]! * y[(i + 2 * t) % BIG_BLOCK]!;
+          sink = s;
+        }
+      }
+    }
+    return sink;
+  };
+}

@@ -4,7 +4,7 @@
  *
  *   node --expose-gc --import tsx bench/run.ts [--quick] [--only=plucker,decompose,server] [--out=FILE]
  *
- * --quick makes fewer and shorter rounds (about half a minute in all); the
+ * --quick makes fewer and shorter rounds (about a minute in all); the
  * full run takes a few minutes. The server part drives dist/server.cjs, so
  * build first (`npm run build`) to measure the current sources.
  */
@@ -66,7 +66,7 @@ const targets = [];
 if (wanted('plucker')) {
   log('Plücker coordinates');
   const results = runPluckerBenchmark(
-    quick ? { rounds: 2, budgetMs: 25, sampleSize: 60 } : { rounds: 5, budgetMs: 120, sampleSize: 400 },
+    quick ? { rounds: 2, budgetMs: 25, sampleSize: 60 } : { rounds: 7, budgetMs: 80, sampleSize: 400 },
     log,
   );
   emit(`## Plücker coordinates\n\n${pluckerTable(results)}`);

@@ -168,7 +168,12 @@ describe('QQ: minors exactly at Hadamard’s bound, at each switch of the recons
       assert.equal(hadamardBoundSquared(integers), bound * bound);
       const first = ours[0]!;
       assert.equal(first.num < 0n ? -first.num : first.num, bound);
-      assertSame(ours, pluckerFractionFree(rows, n), `k = ${k}, scale ${c}`);
+      const reference = pluckerFractionFree(rows, n);
+      assertSame(ours, reference, `k = ${k}, scale ${c}`);
+      // The multimodular path itself, whichever method pluckerCoordinates chose for this shape.
+      const modular = pluckerMultimodular(rows, n, undefined, 1000);
+      assert.ok(modular !== undefined);
+      assertSame(modular, reference, `k = ${k}, scale ${c}, multimodular`);
       // Permuted columns give the other signs; they must still agree.
       const permuted = rows.map((row) => [row[n - 1]!, ...row.slice(0, n - 1)].reverse());
       assertSame(pluckerCoordinates(QQ, permuted, n), pluckerFractionFree(permuted, n), `k = ${k}, scale ${c}, permuted`);

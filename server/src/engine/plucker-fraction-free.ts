@@ -38,11 +38,58 @@ interface BareissState {
 export function clearDenominators(rows: readonly (readonly Rational[])[]): { integers: bigint[][]; scale: bigint } {
   let scale = 1n;
   const integers = rows.map((row) => {
-    const l = row.reduce((acc, x) => lcmBigInt(acc, x.den), 1n);
+    let l = 1n;
+    for (const x of row) if (x.den !== 1n) l = lcmBigInt(l, x.den);
     scale *= l;
-    return row.map((x) => (x.num * l) / x.den);
+    return l === 1n ? row.map((x) => x.num) : row.map((x) => (x.num * l) / x.den);
   });
   return { integers, scale };
+}
+
+/**
+ * The 2×2 minors a_i·b_j − a_j·b_i of a rational 2×n matrix, on the integers
+ * after clearing denominators: what the walk computes for two rows, without
+ * its bookkeeping (for so few products that is most of the cost).
+ */
+export function pluckerTwoRows(rows: readonly (readonly Rational[])[], n: number): Rational[] {
+  const { integers, scale } = clearDenominators(rows);
+  const a = integers[0]!;
+  const b = integers[1]!;
+  const out: Rational[] = [];
+  for (let i = 0; i < n; i++) {
+    for (let j = i + 1; j < n; j++) {
+      const m = a[i]! * b[j]! - a[j]! * b[i]!;
+      out.push(m === 0n ? QQ.zero : scale === 1n ? { num: m, den: 1n } : QQ.fromRational(m, scale));
+    }
+  }
+  return out;
+}
+
+/**
+ * The 3×3 minors of a rational 3×n matrix with rows a, b, c, on the integers
+ * after clearing denominators, expanded along a: a_x·M(y,z) − a_y·M(x,z) +
+ * a_z·M(x,y), where M are the 2×2 minors of b and c, each found once
+ * (Laplace expansion). Three products per coordinate and two per pair of
+ * columns, fewer than the walk's eliminations.
+ */
+export function pluckerThreeRows(rows: readonly (readonly Rational[])[], n: number): Rational[] {
+  const { integers, scale } = clearDenominators(rows);
+  const [a, b, c] = integers as [bigint[], bigint[], bigint[]];
+  const minors: bigint[] = new Array<bigint>(n * n).fill(0n);
+  for (let y = 0; y < n; y++) {
+    for (let z = y + 1; z < n; z++) minors[y * n + z] = b[y]! * c[z]! - b[z]! * c[y]!;
+  }
+  const out: Rational[] = [];
+  for (let x = 0; x < n; x++) {
+    for (let y = x + 1; y < n; y++) {
+      const mxy = minors[x * n + y]!;
+      for (let z = y + 1; z < n; z++) {
+        const m = a[x]! * minors[y * n + z]! - a[y]! * minors[x * n + z]! + a[z]! * mxy;
+        out.push(m === 0n ? QQ.zero : scale === 1n ? { num: m, den: 1n } : QQ.fromRational(m, scale));
+      }
+    }
+  }
+  return out;
 }
 
 /** All C(n, k) maximal minors of the rational k×n matrix `rows` (k ≥ 1), by fraction-free elimination. */

@@ -20,6 +20,7 @@ import { MODULAR_LIMIT, invMod, mulMod } from './modular-arithmetic.js';
 import { emptyModularWalkCounts, pluckerModular, type ModularWalkCounts } from './plucker-modular.js';
 import { clearDenominators } from './plucker-fraction-free.js';
 import { QQ, type Rational } from './rational.js';
+import { binomial } from './subsets.js';
 
 /**
  * Beyond this many primes the fraction-free bigint walk is faster: each
@@ -29,6 +30,9 @@ import { QQ, type Rational } from './rational.js';
  * entries of 4 to 48 bits (the crossing is at 6 to 8 primes).
  */
 export const MULTIMODULAR_PRIME_LIMIT = 6;
+
+/** Below this many coordinates, three primes or more are not worth their setup. */
+export const MULTIMODULAR_MINIMUM_OUTPUT = 4096;
 
 /** Primes below 2^31 in descending order, found on demand and kept. */
 const primes: number[] = [];
@@ -116,8 +120,9 @@ function toBigInt(m: number): bigint {
 
 /**
  * All C(n, k) maximal minors of the rational k×n matrix `rows` (k ≥ 1), or
- * undefined when more than `MULTIMODULAR_PRIME_LIMIT` primes would be needed.
- * `report`, when given, is filled in.
+ * undefined when more than `primeLimit` primes would be needed, or (with the
+ * default limit) three or more for fewer than `MULTIMODULAR_MINIMUM_OUTPUT`
+ * coordinates. `report`, when given, is filled in.
  */
 export function pluckerMultimodular(
   rows: readonly (readonly Rational[])[],
@@ -129,6 +134,9 @@ export function pluckerMultimodular(
   const boundSquared = hadamardBoundSquared(integers);
   const r = primesNeeded(boundSquared);
   if (r > primeLimit) return undefined;
+  // With three primes or more, rebuilding each coordinate costs bigint arithmetic of its own; for few
+  // coordinates the setup is not repaid (measured at G(2,8) to G(5,15)).
+  if (r > 2 && binomial(n, rows.length) < MULTIMODULAR_MINIMUM_OUTPUT && primeLimit === MULTIMODULAR_PRIME_LIMIT) return undefined;
   const moduli = Array.from({ length: r }, (_, i) => modularPrime(i));
   const images = moduli.map((p) => pluckerModular(residues(integers, p), n, p, report?.walk));
   const count = images[0]!.length;

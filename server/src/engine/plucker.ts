@@ -8,19 +8,19 @@
  * - GF(p) with p < 2^31: plucker-modular.ts, on 32-bit integer arrays with
  *   exact floating-point-assisted modular products, never through the `Field`
  *   interface;
- * - the rationals: plucker-multimodular.ts, the same walk modulo enough primes
- *   to pin every minor down by Hadamard's bound, then Chinese remaindering; for
- *   matrices whose minors are too large for that to pay off, plucker-fraction-free.ts
- *   (fraction-free Bareiss updates on bigints);
+ * - the rationals: plucker-rational.ts chooses between minors written out on
+ *   the integers (two or three rows), plucker-multimodular.ts (the walk modulo
+ *   enough primes to pin every minor down by Hadamard's bound, then Chinese
+ *   remaindering) and, for matrices whose minors are too large for that to pay
+ *   off, plucker-fraction-free.ts (fraction-free Bareiss updates on bigints);
  * - any other field: the generic walk below, through the field's operations.
  * All of them are exact; the tests compare each fast path with the generic one.
  */
 import type { Field } from './field.js';
 import { determinant } from './matrix.js';
 import { fromDense, type Multivector } from './multivector.js';
-import { pluckerFractionFree } from './plucker-fraction-free.js';
 import { pluckerModular } from './plucker-modular.js';
-import { pluckerMultimodular } from './plucker-multimodular.js';
+import { pluckerRational } from './plucker-rational.js';
 import { walkColumnSets } from './plucker-walk.js';
 import { smallPrimeModulus } from './prime-field.js';
 import { QQ, type Rational } from './rational.js';
@@ -77,11 +77,6 @@ function pluckerOverField<T>(F: Field<T>, basisRows: readonly (readonly T[])[], 
   return out;
 }
 
-/** The rationals: multimodular where it pays off, fraction-free on bigints otherwise (k ≥ 1). */
-function pluckerOverRationals(basisRows: readonly (readonly Rational[])[], n: number): Rational[] {
-  return pluckerMultimodular(basisRows, n) ?? pluckerFractionFree(basisRows, n);
-}
-
 /**
  * All C(n, k) maximal minors of the k×n matrix `basisRows`, in lexicographic
  * order of their column sets: entry number rankLex(K, n) is det of the columns
@@ -92,8 +87,10 @@ export function pluckerCoordinates<T>(F: Field<T>, basisRows: readonly (readonly
   const k = basisRows.length;
   if (k > n) return [];
   if (k === 0) return [F.one];
+  // The 1×1 minors of one row are its entries.
+  if (k === 1) return basisRows[0]!.slice();
   if ((F as unknown) === QQ) {
-    return pluckerOverRationals(basisRows as unknown as readonly (readonly Rational[])[], n) as unknown as T[];
+    return pluckerRational(basisRows as unknown as readonly (readonly Rational[])[], n) as unknown as T[];
   }
   const p = smallPrimeModulus(F);
   if (p !== undefined) {
