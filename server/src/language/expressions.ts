@@ -13,7 +13,7 @@ import {
   scale as scaleMV,
   sub as subMV,
   wedge as wedgeMV,
-  type Multivector,
+  toDense,
 } from '../engine/multivector.js';
 import { binomialBig } from '../engine/subsets.js';
 import { parseRational } from '../engine/rational.js';
@@ -368,7 +368,7 @@ function spanCall(env: Environment, e: Call, ctx: ExprContext): SubspaceValue {
   const vectors = e.args.map((arg) => {
     const v = evaluate(env, arg, ctx);
     if (v.t === 'vector') return v;
-    if (v.t === 'multivector' && v.mv.k === 1) return { t: 'vector' as const, space: v.space, coords: denseVector(env, v.mv, v.space) };
+    if (v.t === 'multivector' && v.mv.k === 1) return { t: 'vector' as const, space: v.space, coords: toDense(env.F, v.mv) };
     fail('type/operand', arg.span, `span takes vectors, found ${describeValue(v)}`);
   });
   const space = vectors[0]!.space;
@@ -382,12 +382,6 @@ function spanCall(env: Environment, e: Call, ctx: ExprContext): SubspaceValue {
   });
   reportDependency(env, 'math/degenerate-span', rows, names, e.args.map((a) => a.span), related, e.span, 'this list of vectors', () => spanFixes(env, e, rows));
   return subspaceOf(env, space, rows, { given: rows });
-}
-
-function denseVector(env: Environment, mv: Multivector<Scalar>, space: SpaceInfo): Scalar[] {
-  const coords = new Array(space.dim).fill(env.F.zero);
-  for (const t of mv.terms.values()) coords[t.subset[0]!] = t.coeff;
-  return coords;
 }
 
 function rowsSubspace(env: Environment, e: RowsExpr, ctx: ExprContext): SubspaceValue {

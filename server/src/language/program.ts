@@ -8,7 +8,7 @@ import { finiteField } from '../engine/finite-fields.js';
 import { FieldOrderLimitError } from '../engine/extension-field.js';
 import { QQ } from '../engine/rational.js';
 import { NotPrimeError } from '../engine/prime-field.js';
-import { fromVector, isZeroMV } from '../engine/multivector.js';
+import { fromVector, isZeroMV, toDense } from '../engine/multivector.js';
 import type { ClaimStmt, DeclStmt, FieldStmt, FlagStmt, Ident, MapStmt, Program, ShowStmt, SpaceStmt } from './ast.js';
 import { flagFromVectors } from './geometry.js';
 import { checkClaim, shortTitle } from './claims.js';
@@ -286,11 +286,8 @@ function coerce(env: Environment, value: Value, s: DeclStmt): Value {
   switch (s.declKind) {
     case 'vector':
       if (value.t === 'vector') return value;
-      if (value.t === 'multivector' && value.mv.k === 1) {
-        const coords = new Array(value.space.dim).fill(env.F.zero);
-        for (const t of value.mv.terms.values()) coords[t.subset[0]!] = t.coeff;
-        return { t: 'vector', space: value.space, coords };
-      }
+      // A degree-1 multivector is a vector: its dense coordinates are the vector's.
+      if (value.t === 'multivector' && value.mv.k === 1) return { t: 'vector', space: value.space, coords: toDense(env.F, value.mv) };
       break;
     case 'subspace':
       if (value.t === 'subspace') return value;
