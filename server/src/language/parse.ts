@@ -23,6 +23,10 @@ import * as T from './tokens.js';
 import { statementParser } from './parser.js';
 import { buildStatement, tokenSpan } from './build-ast.js';
 import { strayTokenMessage, suggestStatementKeyword, unexpectedCharacterMessage } from './syntax-messages.js';
+import { PieceMemo } from './piece-memo.js';
+
+/** The parses of recent statement pieces, shared by every parse in this thread (see ./piece-memo.ts). */
+export const PIECE_MEMO = new PieceMemo();
 
 export interface ParseResult {
   program: Program;
@@ -76,6 +80,7 @@ class ProgramReader {
     private readonly text: string,
     private readonly tokens: IToken[],
     private readonly lexErrorOffsets: number[],
+    private readonly memo: PieceMemo | undefined,
   ) {
     tokens.forEach((token, index) => this.indexOfToken.set(token, index));
   }
@@ -105,8 +110,27 @@ class ProgramReader {
     if (firstStart > 0) this.stray(this.tokens.slice(0, firstStart), undefined);
     starts.forEach((start, i) => {
       const end = starts[i + 1] ?? this.tokens.length;
-      const following = this.tokens[end];
-      this.guarded(this.tokens.slice(start, end), () => this.statementPiece(this.tokens.slice(start, end), following));
+      this.piece(this.tokens.slice(start, end), this.tokens[end]);
+    });
+  }
+
+  /** One statement piece: from the memo when the same text was parsed before, else parsed and remembered. */
+  private piece(piece: IToken[], following: IToken | undefined): void {
+    const start = piece[0]!.startOffset;
+    const key = PieceMemo.key(this.text.slice(start, following ? following.startOffset : this.text.length), following?.image);
+    const recalled = this.memo?.recall(key, start);
+    if (recalled) {
+      this.statements.push(...recalled.statements);
+      this.dropped.push(...recalled.dropped);
+      this.problems.push(...recalled.problems);
+      return;
+    }
+    const before = { statements: this.statements.length, dropped: this.dropped.length, problems: this.problems.length };
+    this.guarded(piece, () => this.statementPiece(piece, following));
+    this.memo?.remember(key, start, {
+      statements: this.statements.slice(before.statements),
+      dropped: this.dropped.slice(before.dropped),
+      problems: this.problems.slice(before.problems),
     });
   }
 
@@ -242,7 +266,7 @@ class ProgramReader {
   }
 }
 
-function readProgram(text: string): ParseResult {
+function readProgram(text: string, memo: PieceMemo | undefined): ParseResult {
   const lexed = T.wedgeLexer.tokenize(text);
   const problems: Problem[] = [];
   for (const error of lexed.errors) {
@@ -259,6 +283,7 @@ function readProgram(text: string): ParseResult {
     text,
     lexed.tokens,
     lexed.errors.map((e) => e.offset),
+    memo,
   );
   reader.read();
   problems.push(...reader.problems);
@@ -281,9 +306,9 @@ function deduplicate(problems: Problem[]): Problem[] {
 }
 
 /** Lexes and parses a `.wedge` document. Never throws: internal failures become a `syntax/internal` problem. */
-export function parseProgram(text: string): ParseResult {
+export function parseProgram(text: string, options: { memo?: PieceMemo | false } = {}): ParseResult {
   try {
-    return readProgram(text);
+    return readProgram(text, options.memo === false ? undefined : (options.memo ?? PIECE_MEMO));
   } catch (error) {
     return {
       program: { span: { start: 0, end: text.length }, statements: [], dropped: [] },

@@ -10,7 +10,8 @@
  *   on. An evaluation still running after ~500 ms shows work-done progress (cancellable, naming the
  *   statement being evaluated) and publishes the quick pass's problems so far;
  * - change, with `wedgework.evaluateOn` = 'save' (default): the quick pass
- *   (`evaluate: false`) ~150 ms after typing pauses, diagnostics pushed as
+ *   (`evaluate: false`) right away when the last one was cheap (a few milliseconds, since the parser
+ *   reuses the statements the edit left alone), else ~150 ms after typing pauses; diagnostics pushed as
  *   described in ./documents.ts; hovers and lenses keep answering from the
  *   last evaluation, carried through the edits;
  * - change, with `wedgework.evaluateOn` = 'type': the running evaluation is cancelled and a full
@@ -54,8 +55,17 @@ import { RESULTS_CAPABILITY, RESULTS_NOTIFICATION, type ResultsParams } from './
 import { DEFAULT_SETTINGS, parseSettings, type Settings } from './settings.js';
 import { threadWorkerFactory, WorkerPool } from './worker-pool.js';
 
-/** Delay after the last keystroke before the quick (syntax and names) pass. */
+/**
+ * Delay after the last keystroke before the quick (syntax and names) pass, when the document's last quick pass
+ * took longer than `CHEAP_QUICK_PASS_MS`: then it is worth waiting for a pause in typing.
+ */
 export const QUICK_PASS_DELAY_MS = 150;
+/**
+ * A quick pass at most this long (the parser reuses the statements an edit left alone, so a 1000-line document
+ * takes a few milliseconds) runs right after each change, without waiting for a pause: the changes that arrived
+ * together are still taken in one pass, since it runs after the pending messages.
+ */
+export const CHEAP_QUICK_PASS_MS = 25;
 /** Delay after the last keystroke before evaluating, in 'type' mode. */
 export const EVALUATE_WHILE_TYPING_DELAY_MS = 300;
 
@@ -186,17 +196,29 @@ export function startServer(connection: Connection, options: ServerOptions = {})
   const quickKey = (uri: string) => `quick ${uri}`;
   const evaluateKey = (uri: string) => `evaluate ${uri}`;
 
+  /** How long each document's last quick pass took, which decides how long the next one waits. */
+  const quickPassMs = new Map<string, number>();
+
   /** Runs the quick pass of the current version unless it (or an evaluation of it) is already there. */
   function ensureQuickPass(entry: OpenDocument): void {
     if (evaluationIsCurrent(entry) || entry.quick?.version === entry.document.version) return;
+    const started = performance.now();
     documents.recordQuick(entry, analyze(entry.document.getText(), { evaluate: false }));
+    quickPassMs.set(entry.document.uri, performance.now() - started);
   }
 
   function runQuickPass(uri: string): void {
     const entry = documents.get(uri);
     if (!entry || evaluationIsCurrent(entry)) return;
+    const started = performance.now();
     documents.recordQuick(entry, analyze(entry.document.getText(), { evaluate: false }));
+    quickPassMs.set(uri, performance.now() - started);
     publish(entry);
+  }
+
+  function quickPassDelay(uri: string): number {
+    const last = quickPassMs.get(uri);
+    return last !== undefined && last <= CHEAP_QUICK_PASS_MS ? 0 : QUICK_PASS_DELAY_MS;
   }
 
   function logOutcome(uri: string, version: number, outcome: EvaluationOutcome): void {
@@ -334,7 +356,7 @@ export function startServer(connection: Connection, options: ServerOptions = {})
         evaluations.cancel(uri);
         timers.schedule(evaluateKey(uri), EVALUATE_WHILE_TYPING_DELAY_MS, () => void evaluateGuarded(uri));
       } else {
-        timers.schedule(quickKey(uri), QUICK_PASS_DELAY_MS, () => void quickPassGuarded(uri));
+        timers.schedule(quickKey(uri), quickPassDelay(uri), () => void quickPassGuarded(uri));
       }
     }),
   );
@@ -354,6 +376,7 @@ export function startServer(connection: Connection, options: ServerOptions = {})
       const lastVersion = documents.get(uri)?.document.version ?? 0;
       documents.close(uri);
       settingsByUri.delete(uri);
+      quickPassMs.delete(uri);
       void connection
         .sendDiagnostics({ uri, diagnostics: [] })
         .catch((error: unknown) => logFailure('clearing diagnostics', error));
