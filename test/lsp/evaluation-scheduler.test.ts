@@ -7,17 +7,20 @@
  */
 import { describe, test } from 'node:test';
 import assert from 'node:assert/strict';
-import { EvaluationScheduler, type EvaluationJob, type WorkerSource } from '../../server/src/lsp/evaluation-scheduler.js';
+import { CANCEL_GRACE_MS, EvaluationScheduler, type EvaluationJob, type WorkerSource } from '../../server/src/lsp/evaluation-scheduler.js';
 import type { WorkerHandle } from '../../server/src/lsp/worker-pool.js';
 import { FakeClock } from './fake-clock.js';
 import { analysisOf, FakeWorker } from './fake-workers.js';
 
 class RecordingPool implements WorkerSource {
   readonly taken: FakeWorker[] = [];
+  /** The document each `take` asked for. */
+  readonly keys: (string | undefined)[] = [];
   readonly givenBack: FakeWorker[] = [];
   readonly discarded: FakeWorker[] = [];
 
-  take(): WorkerHandle {
+  take(document?: string): WorkerHandle {
+    this.keys.push(document);
     const worker = new FakeWorker(this.taken.length + 1);
     this.taken.push(worker);
     return worker;
@@ -74,22 +77,62 @@ describe('EvaluationScheduler', () => {
     assert.equal(scheduler.isBusy('a'), false);
   });
 
-  test('a newer evaluation of the same document cancels the older one and terminates its worker', async () => {
+  test('a newer evaluation of the same document cancels the older one; its worker, stopping in time, serves the newer', async () => {
     const { pool, scheduler } = setUp();
     const first = scheduler.run('a', job('old'));
     const [oldWorker] = pool.taken;
-    oldWorker!.reply({ kind: 'started', id: oldWorker!.lastId() });
+    const oldId = oldWorker!.lastId();
+    oldWorker!.reply({ kind: 'started', id: oldId });
     const second = scheduler.run('a', job('new'));
     assert.deepEqual(await first, { status: 'cancelled' });
-    assert.equal(oldWorker!.terminated, true);
-    assert.deepEqual(pool.discarded, [oldWorker]);
+    assert.deepEqual(oldWorker!.stopRequests, [oldId], 'the old worker is asked to stop');
+    assert.equal(oldWorker!.terminated, false);
+    assert.equal(pool.taken.length, 1, 'the newer evaluation waits for the worker that knows the document');
+    assert.equal(scheduler.runningCount(), 1, 'the stopping worker still counts as running');
+    oldWorker!.reply({ kind: 'stopped', id: oldId });
+    assert.deepEqual(pool.givenBack, [oldWorker], 'it goes back to the pool with its memo');
     const newWorker = pool.taken[1]!;
-    assert.notEqual(newWorker, oldWorker);
+    assert.deepEqual(pool.keys, ['a', 'a'], 'and the pool is asked for a worker that knows the document');
     assert.equal(newWorker.requests[0]!.text, 'new');
+    assert.equal(newWorker.requests[0]!.document, 'a');
     newWorker.reply({ kind: 'started', id: newWorker.lastId() });
     newWorker.reply({ kind: 'finished', id: newWorker.lastId(), analysis: analysisOf('new') });
     const settled = await second;
     assert.equal(settled.status === 'finished' && settled.analysis.text, 'new');
+  });
+
+  test('a cancelled evaluation whose worker does not stop within the grace period has its worker terminated', async () => {
+    const { pool, clock, scheduler } = setUp();
+    const first = scheduler.run('a', job('old'));
+    const oldWorker = pool.taken[0]!;
+    oldWorker.reply({ kind: 'started', id: oldWorker.lastId() });
+    const second = scheduler.run('a', job('new'));
+    assert.deepEqual(await first, { status: 'cancelled' });
+    clock.advance(CANCEL_GRACE_MS - 1);
+    assert.equal(oldWorker.terminated, false);
+    clock.advance(1);
+    assert.equal(oldWorker.terminated, true, 'still inside a long statement: terminated');
+    assert.deepEqual(pool.discarded, [oldWorker]);
+    // A late reply of the terminated worker changes nothing.
+    oldWorker.reply({ kind: 'stopped', id: oldWorker.lastId() });
+    assert.deepEqual(pool.givenBack, []);
+    const newWorker = pool.taken[1]!;
+    newWorker.reply({ kind: 'finished', id: newWorker.lastId(), analysis: analysisOf('new') });
+    assert.equal((await second).status, 'finished');
+  });
+
+  test('while one document\'s worker stops, another document\'s evaluation may start', async () => {
+    const { pool, scheduler } = setUp(2);
+    void scheduler.run('a', job('A1'));
+    const workerA = pool.taken[0]!;
+    void scheduler.run('a', job('A2'));
+    void scheduler.run('b', job('B'));
+    assert.equal(pool.taken.length, 2, 'b starts on a second worker; A2 waits for a\'s worker');
+    assert.equal(pool.taken[1]!.requests[0]!.text, 'B');
+    workerA.reply({ kind: 'stopped', id: workerA.lastId() });
+    assert.equal(pool.taken.length, 3, 'once a\'s worker is back, A2 starts');
+    assert.equal(pool.taken[2]!.requests[0]!.text, 'A2');
+    assert.equal(scheduler.runningCount(), 2);
   });
 
   test('replies that carry another request id are ignored', async () => {

@@ -11,6 +11,7 @@ import { join } from 'node:path';
 import { analyze } from '../../server/src/language/index.js';
 import type { WorkerReply } from '../../server/src/lsp/evaluation-messages.js';
 import { threadWorkerFactory, WorkerPool, type WorkerHandle } from '../../server/src/lsp/worker-pool.js';
+import { slimForEditor } from '../../server/src/lsp/slim-analysis.js';
 import { assertBundleIsFresh, ROOT } from '../support/bundles.js';
 
 const WORKER_FILE = join(ROOT, 'dist/evaluation-worker.cjs');
@@ -74,14 +75,14 @@ describe('the bundled evaluation worker', { timeout: 60_000 }, () => {
     console.log(`cold worker start to ready (load + warm-up): ${times.map((t) => t.toFixed(0)).join(', ')} ms`);
   });
 
-  test('returns exactly the analysis of this thread, after one statement report per statement', async () => {
+  test('returns exactly the analysis of this thread (slimmed for the editor), after one statement report per statement', async () => {
     const pool = new WorkerPool(threadWorkerFactory(WORKER_FILE));
     pools.push(pool);
     const worker = pool.take();
     const replies = inbox(worker);
-    worker.post({ id: 1, text: TEXT, options: { normalization: 'primitive' } });
+    worker.post({ id: 1, document: 'a', text: TEXT, options: { normalization: 'primitive' } });
     const finished = await replies.next('finished');
-    assert.deepStrictEqual(finished.analysis, analyze(TEXT, { evaluate: true, normalization: 'primitive' }));
+    assert.deepStrictEqual(finished.analysis, slimForEditor(analyze(TEXT, { evaluate: true, normalization: 'primitive' })));
     assert.deepEqual(finished.analysis.problems, [], 'the claim holds');
     const statements = replies.all.filter((r) => r.kind === 'statement');
     assert.deepEqual(
@@ -91,13 +92,46 @@ describe('the bundled evaluation worker', { timeout: 60_000 }, () => {
     pool.giveBack(worker);
   });
 
+  test('the next evaluation of the same document evaluates only the edited statement, and agrees with this thread', async () => {
+    const pool = new WorkerPool(threadWorkerFactory(WORKER_FILE));
+    pools.push(pool);
+    const worker = pool.take('doc');
+    const replies = inbox(worker);
+    worker.post({ id: 1, document: 'doc', text: TEXT, options: {} });
+    await replies.next('finished');
+    replies.all.splice(0);
+    const edited = TEXT.replace('[1 : 3 : 1 : -2 : 0 : 2]', '[1 : 3 : 1 : -2 : 0 : 3]');
+    worker.post({ id: 2, document: 'doc', text: edited, options: {} });
+    const finished = await replies.next('finished');
+    const evaluated = replies.all.filter((r) => r.kind === 'statement').map((r) => (r.kind === 'statement' ? edited.slice(r.span.start, r.span.end).split(' ')[0] : ''));
+    assert.deepEqual(evaluated, ['claim'], 'the space and the subspace come from the memo');
+    assert.deepStrictEqual(finished.analysis, slimForEditor(analyze(edited, { evaluate: true })));
+    assert.equal(finished.analysis.problems[0]?.code, 'claim/plucker', 'the edited claim is false');
+    pool.giveBack(worker);
+  });
+
+  test('a stop request is read before the next statement, and the worker takes the next job', async () => {
+    const pool = new WorkerPool(threadWorkerFactory(WORKER_FILE));
+    pools.push(pool);
+    const worker = pool.take();
+    const replies = inbox(worker);
+    await replies.next('ready');
+    // Asked before the worker reads the request: it stops before the first statement.
+    worker.requestStop(7);
+    worker.post({ id: 7, document: 'a', text: TEXT, options: {} });
+    assert.equal((await replies.next('stopped')).id, 7);
+    worker.post({ id: 8, document: 'a', text: TEXT, options: {} });
+    assert.deepEqual((await replies.next('finished')).analysis.problems, []);
+    pool.giveBack(worker);
+  });
+
   test('a busy worker is terminated and the next job starts on the warm spare at once', async () => {
     const pool = new WorkerPool(threadWorkerFactory(WORKER_FILE));
     pools.push(pool);
     pool.warm();
     const busy = pool.take();
     const busyReplies = inbox(busy);
-    busy.post({ id: 1, text: HEAVY, options: {} });
+    busy.post({ id: 1, document: 'heavy', text: HEAVY, options: {} });
     await busyReplies.next('ready');
     // The busy worker is on the heavy statement (its second) once it reports it.
     await busyReplies.next('statement');
@@ -110,7 +144,7 @@ describe('the bundled evaluation worker', { timeout: 60_000 }, () => {
     pool.discard(busy);
     const spare = pool.take();
     const spareReplies = inbox(spare);
-    spare.post({ id: 2, text: TEXT, options: {} });
+    spare.post({ id: 2, document: 'a', text: TEXT, options: {} });
     const started = await spareReplies.next('started');
     const startedAfter = performance.now() - restartedAt;
     const finished = await spareReplies.next('finished');

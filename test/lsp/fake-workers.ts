@@ -11,8 +11,14 @@ export class FakeWorker implements WorkerHandle {
   readonly requests: EvaluationRequest[] = [];
   listener: WorkerListener | undefined;
   terminated = false;
+  /** The request ids the scheduler asked this worker to stop. */
+  readonly stopRequests: number[] = [];
 
   constructor(readonly serial: number) {}
+
+  requestStop(id: number): void {
+    this.stopRequests.push(id);
+  }
 
   post(request: EvaluationRequest): void {
     if (this.terminated) throw new Error(`worker ${this.serial} is terminated`);

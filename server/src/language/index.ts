@@ -10,13 +10,19 @@ import { parseProgram } from './parse.js';
 import { evaluateProgram } from './program.js';
 import { resolveNames } from './scope.js';
 import { conventionSentence, readConventions } from './conventions.js';
+import { EvaluationStopped } from './stopped.js';
 import { DEFAULT_LIMITS, type Analysis, type AnalyzeOptions, type Hover, type Lens, type Problem } from './types.js';
 
 export * from './types.js';
 export * from './services/index.js';
 export { actionsAt, applyEdits } from './fixes/index.js';
 export { exportLatex } from './latex-export.js';
+export { EvaluationMemo } from './statement-memo.js';
+export { EvaluationStopped } from './stopped.js';
 
+/**
+ * Analyzes a document. It throws only `EvaluationStopped`, and only when `options.shouldStop` asked for it.
+ */
 export function analyze(text: string, options: AnalyzeOptions): Analysis {
   try {
     const { program, problems: syntax } = parseProgram(text);
@@ -36,7 +42,11 @@ export function analyze(text: string, options: AnalyzeOptions): Analysis {
     const problems: Problem[] = [...syntax, ...conventions.problems, ...resolution.problems];
     const facts = { program, symbols: resolution.symbols, uses: resolution.references };
     if (!options.evaluate) return { text, problems: sortProblems(problems), results: [], references, evaluated: false, syntax: facts };
-    const outcome = evaluateProgram(program, text, conventions.convention, { ...DEFAULT_LIMITS, ...options.limits }, options.onStatement);
+    const outcome = evaluateProgram(program, text, conventions.convention, { ...DEFAULT_LIMITS, ...options.limits }, {
+      ...(options.onStatement ? { onStatement: options.onStatement } : {}),
+      ...(options.shouldStop ? { shouldStop: options.shouldStop } : {}),
+      ...(options.memo ? { memo: options.memo } : {}),
+    });
     // Name resolution already reported unknown names; evaluation stays silent on them.
     problems.push(...outcome.problems);
     return {
@@ -49,6 +59,7 @@ export function analyze(text: string, options: AnalyzeOptions): Analysis {
       syntax: facts,
     };
   } catch (err) {
+    if (err instanceof EvaluationStopped) throw err;
     // A defect of ours must not take the editor down: report it on the whole text.
     const message = err instanceof Error ? err.message : String(err);
     return {

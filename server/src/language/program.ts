@@ -19,6 +19,13 @@ import { Failure, Poisoned, fail } from './failure.js';
 import { presentSpace, presentValue, type Presented } from './present.js';
 import type { Limits, Problem, Result, ResultKind, Span } from './types.js';
 import { describeValue, type SpaceInfo, type Value } from './values.js';
+import { EvaluationMemo, RecordingMap, type RecordedMaps } from './statement-memo.js';
+import { EvaluationStopped } from './stopped.js';
+import type { Binding } from './environment.js';
+
+interface RunHooks extends EvaluationHooks {
+  contextKey: string;
+}
 
 export interface ProgramOutcome {
   results: Result[];
@@ -103,16 +110,45 @@ class ProgramEvaluator {
     readonly source: string,
   ) {}
 
-  run(program: Program, onStatement?: (span: Span) => void): void {
+  run(program: Program, hooks: RunHooks): void {
+    const { memo, onStatement, shouldStop } = hooks;
     for (const s of program.statements) {
-      onStatement?.(s.span);
-      try {
-        this.statement(s);
-      } catch (err) {
-        if (s.type === 'decl') this.env.bindings.set(s.name.name, { value: undefined, declSpan: s.span, nameSpan: s.name.span });
-        if (err instanceof Failure) this.env.problems.push(err.problem);
-        else if (!(err instanceof Poisoned)) this.env.problems.push(internalProblem(err, s.span));
+      if (shouldStop?.()) throw new EvaluationStopped();
+      if (!memo) {
+        onStatement?.(s.span);
+        this.guardedStatement(s);
+        continue;
       }
+      const maps = this.env as unknown as RecordedMaps;
+      const key = `${hooks.contextKey}\u0000${this.source.slice(s.span.start, s.span.end)}`;
+      const entry = memo.find(key, maps);
+      let produced: { results: Result[]; problems: Problem[] };
+      if (entry?.outcome) {
+        produced = memo.replay(entry, s.span, maps);
+        memo.replayed++;
+      } else {
+        onStatement?.(s.span);
+        produced = memo.record(key, s.span, maps, () => {
+          const results = this.results.length;
+          const problems = this.env.problems.length;
+          this.guardedStatement(s);
+          return { results: this.results.splice(results), problems: this.env.problems.splice(problems) };
+        }, entry);
+        memo.evaluated++;
+      }
+      this.results.push(...produced.results);
+      this.env.problems.push(...produced.problems);
+    }
+  }
+
+  /** One statement; a failure becomes its problem and leaves a declared name bound to nothing. */
+  private guardedStatement(s: Program['statements'][number]): void {
+    try {
+      this.statement(s);
+    } catch (err) {
+      if (s.type === 'decl') this.env.bindings.set(s.name.name, { value: undefined, declSpan: s.span, nameSpan: s.name.span });
+      if (err instanceof Failure) this.env.problems.push(err.problem);
+      else if (!(err instanceof Poisoned)) this.env.problems.push(internalProblem(err, s.span));
     }
   }
 
@@ -316,12 +352,29 @@ function internalProblem(err: unknown, span: Span): Problem {
   };
 }
 
+/** What the caller of `evaluateProgram` may add (see `AnalyzeOptions`). */
+export interface EvaluationHooks {
+  onStatement?: (span: Span) => void;
+  /** Asked before each statement; `true` stops the evaluation with `EvaluationStopped`. */
+  shouldStop?: () => boolean;
+  /** The document's memo of statement outcomes (./statement-memo.ts), to re-evaluate only what an edit affects. */
+  memo?: EvaluationMemo;
+}
+
+/**
+ * Everything besides a statement's own text and the names it looks up that its outcome depends on: the field
+ * (with the name of its generator), the file's conventions and the limits.
+ */
+function contextKey(field: AnyField, generator: string | undefined, fileConvention: FileConvention, limits: Limits): string {
+  return JSON.stringify({ field: field.name, generator, convention: fileConvention, limits });
+}
+
 export function evaluateProgram(
   program: Program,
   source: string,
   fileConvention: FileConvention,
   limits: Limits,
-  onStatement?: (span: Span) => void,
+  hooks: EvaluationHooks = {},
 ): ProgramOutcome {
   const problems: Problem[] = [];
   const { field } = chooseField(program, problems);
@@ -332,8 +385,9 @@ export function evaluateProgram(
     convention,
     labels: new Labels(convention.firstLabel),
     limits,
-    spaces: new Map(),
-    bindings: new Map(),
+    // Recording maps only where a memo listens: they cost a little on every lookup.
+    spaces: hooks.memo ? new RecordingMap<SpaceInfo>('spaces') : new Map(),
+    bindings: hooks.memo ? new RecordingMap<Binding>('bindings') : new Map(),
     problems,
   };
   const generator = program.statements.find((s): s is FieldStmt => s.type === 'field' && s.generator !== undefined)?.generator;
@@ -342,6 +396,8 @@ export function evaluateProgram(
     env.bindings.set(generator.name, { value: { t: 'scalar', value: generatorElement.call(field) }, declSpan: generator.span, nameSpan: generator.span });
   }
   const evaluator = new ProgramEvaluator(env, source);
-  evaluator.run(program, onStatement);
+  hooks.memo?.begin();
+  evaluator.run(program, { ...hooks, contextKey: contextKey(field, generator?.name, fileConvention, limits) });
+  hooks.memo?.prune();
   return { results: evaluator.results, problems, convention };
 }

@@ -5,6 +5,7 @@
  * units, as JavaScript strings count them), never line/column pairs. Lines and
  * columns appear only at the edges (the LSP conversion module and the CLI).
  */
+import type { EvaluationMemo } from './statement-memo.js';
 
 import type { Program } from './ast.js';
 import type { Reference, SymbolInfo } from './scope.js';
@@ -83,6 +84,17 @@ export interface AnalyzeOptions {
    * evaluation is when it has to stop it. Must not throw.
    */
   onStatement?: (span: Span) => void;
+  /**
+   * Asked before each statement is evaluated; when it answers `true`, `analyze` stops there and throws
+   * `EvaluationStopped` (./stopped.ts). Must not throw.
+   */
+  shouldStop?: () => boolean;
+  /**
+   * The document's memo of statement outcomes (./statement-memo.ts): statements whose text, context and
+   * looked-up names are unchanged since an earlier evaluation with the same memo are not evaluated again.
+   * One memo per document.
+   */
+  memo?: EvaluationMemo;
 }
 
 export interface Limits {

@@ -3,8 +3,12 @@
  *
  * The rules:
  * - a new evaluation of a document replaces the one still queued or running
- *   for it: the older one is cancelled (its worker terminated) and its promise
- *   settles with `cancelled`, so its results never reach the editor;
+ *   for it: the older one is cancelled and its promise settles with
+ *   `cancelled` at once, so its results never reach the editor. Its worker
+ *   is asked to stop before its next statement and, when it does so within
+ *   `CANCEL_GRACE_MS`, goes back to the pool with its memo of the document
+ *   (the newer evaluation waits for it, so as to evaluate only what changed);
+ *   a worker still busy after that, inside a long statement, is terminated;
  * - at most `maxConcurrent` evaluations run at once; the others wait in the
  *   order they were asked for (a configuration change re-evaluates every open
  *   document, which must not start a thread for each);
@@ -20,6 +24,12 @@ import type { Analysis, Span } from '../language/index.js';
 import { SYSTEM_CLOCK, type Clock } from './clock.js';
 import type { EvaluationOptions, WorkerReply } from './evaluation-messages.js';
 import type { WorkerHandle } from './worker-pool.js';
+
+/**
+ * How long a cancelled evaluation's worker may take to stop between two statements before it is
+ * terminated. Statements are mostly far quicker; one that is not would keep the newer evaluation waiting.
+ */
+export const CANCEL_GRACE_MS = 60;
 
 export interface EvaluationJob {
   text: string;
@@ -43,7 +53,8 @@ export type EvaluationOutcome =
 
 /** The part of ./worker-pool.ts the scheduler needs. */
 export interface WorkerSource {
-  take(): WorkerHandle;
+  /** A worker, preferably one that has evaluated `document` before. */
+  take(document?: string): WorkerHandle;
   giveBack(worker: WorkerHandle): void;
   discard(worker: WorkerHandle): void;
 }
@@ -62,6 +73,8 @@ interface Entry {
 export class EvaluationScheduler {
   private readonly entries = new Map<string, Entry>();
   private readonly queue: Entry[] = [];
+  /** Workers of cancelled evaluations that have been asked to stop, by document. They still count as running. */
+  private readonly draining = new Map<string, WorkerHandle>();
   private running = 0;
   private nextRequestId = 1;
 
@@ -86,7 +99,7 @@ export class EvaluationScheduler {
   cancel(key: string): boolean {
     const entry = this.entries.get(key);
     if (!entry) return false;
-    this.finish(entry, { status: 'cancelled' }, 'discard');
+    this.finish(entry, { status: 'cancelled' }, 'drain');
     return true;
   }
 
@@ -98,8 +111,10 @@ export class EvaluationScheduler {
     return true;
   }
 
+  /** Cancels every evaluation and terminates every worker at once (the server is shutting down). */
   cancelAll(): void {
-    for (const key of [...this.entries.keys()]) this.cancel(key);
+    for (const entry of [...this.entries.values()]) this.finish(entry, { status: 'cancelled' }, 'discard');
+    for (const worker of this.draining.values()) worker.terminate();
   }
 
   isBusy(key: string): boolean {
@@ -115,13 +130,16 @@ export class EvaluationScheduler {
   }
 
   private pump(): void {
-    while (this.running < this.maxConcurrent && this.queue.length > 0) {
-      this.start(this.queue.shift()!);
+    while (this.running < this.maxConcurrent) {
+      // An evaluation whose document's previous worker is still stopping waits for that worker.
+      const next = this.queue.findIndex((e) => !this.draining.has(e.key));
+      if (next < 0) return;
+      this.start(this.queue.splice(next, 1)[0]!);
     }
   }
 
   private start(entry: Entry): void {
-    const worker = this.workers.take();
+    const worker = this.workers.take(entry.key);
     const requestId = this.nextRequestId++;
     entry.worker = worker;
     entry.requestId = requestId;
@@ -143,7 +161,7 @@ export class EvaluationScheduler {
         );
       },
     });
-    worker.post({ id: requestId, text: entry.job.text, options: entry.job.options });
+    worker.post({ id: requestId, document: entry.key, text: entry.job.text, options: entry.job.options });
   }
 
   private onReply(entry: Entry, requestId: number, reply: WorkerReply): void {
@@ -196,15 +214,51 @@ export class EvaluationScheduler {
     return entry.startedAt === undefined ? 0 : this.clock.now() - entry.startedAt;
   }
 
-  /** Settles `entry` once, returns or discards its worker, and lets the next queued evaluation start. */
-  private finish(entry: Entry, outcome: EvaluationOutcome, worker: 'give back' | 'discard'): void {
+  /**
+   * Asks the worker of a cancelled evaluation to stop, and gives it back when it says it did (or finished
+   * anyway), or discards it when it neither does so within `CANCEL_GRACE_MS` nor lives.
+   */
+  private drain(key: string, worker: WorkerHandle, requestId: number): void {
+    let over = false;
+    const done = (how: 'give back' | 'discard') => {
+      if (over) return;
+      over = true;
+      this.clock.clearTimeout(timer);
+      this.draining.delete(key);
+      this.running--;
+      if (how === 'give back') this.workers.giveBack(worker);
+      else this.workers.discard(worker);
+      this.pump();
+    };
+    const timer = this.clock.setTimeout(() => done('discard'), CANCEL_GRACE_MS);
+    this.draining.set(key, worker);
+    worker.listen({
+      reply: (reply) => {
+        if (reply.kind === 'ready' || reply.id !== requestId) return;
+        if (reply.kind === 'stopped' || reply.kind === 'finished' || reply.kind === 'failed') done('give back');
+      },
+      exit: () => done('discard'),
+    });
+    worker.requestStop(requestId);
+  }
+
+  /**
+   * Settles `entry` once, then gives back, discards or drains (see `drain`) its worker, and lets the next
+   * queued evaluation start.
+   */
+  private finish(entry: Entry, outcome: EvaluationOutcome, worker: 'give back' | 'discard' | 'drain'): void {
     if (this.entries.get(entry.key) !== entry) return;
     this.entries.delete(entry.key);
     if (entry.timer !== undefined) this.clock.clearTimeout(entry.timer);
     if (entry.worker) {
-      this.running--;
-      if (worker === 'give back') this.workers.giveBack(entry.worker);
-      else this.workers.discard(entry.worker);
+      if (worker === 'drain') {
+        // Still running until it has stopped; `drain` counts it down.
+        this.drain(entry.key, entry.worker, entry.requestId!);
+      } else {
+        this.running--;
+        if (worker === 'give back') this.workers.giveBack(entry.worker);
+        else this.workers.discard(entry.worker);
+      }
     } else {
       const at = this.queue.indexOf(entry);
       if (at >= 0) this.queue.splice(at, 1);

@@ -10,7 +10,8 @@
  * `MAX_IDLE_WORKERS` wait there, so a busy session does not pile up threads.
  */
 import { Worker } from 'node:worker_threads';
-import type { EvaluationRequest, WorkerReply } from './evaluation-messages.js';
+import type { EvaluationRequest, WorkerReply, WorkerStartData } from './evaluation-messages.js';
+import { MEMOS_PER_WORKER } from './memo-shelf.js';
 
 /** Idle workers kept beyond this many are terminated when they come back. */
 export const MAX_IDLE_WORKERS = 2;
@@ -28,6 +29,11 @@ export interface WorkerHandle {
   listen(listener: WorkerListener | undefined): void;
   /** Ends the thread at once, whatever it is doing. No `exit` is reported to the listener. */
   terminate(): void;
+  /**
+   * Asks the worker to stop the request `id` before its next statement (it then replies `stopped`); the
+   * worker does so only between statements, so a caller in a hurry waits a little and then terminates it.
+   */
+  requestStop(id: number): void;
 }
 
 export type WorkerFactory = () => WorkerHandle;
@@ -43,12 +49,27 @@ export class WorkerPool {
     if (!this.disposed && this.idle.length === 0) this.addIdle(this.create());
   }
 
-  /** A worker for one job: an idle one if any, else a new one. The caller listens to it. */
-  take(): WorkerHandle {
-    const worker = this.idle.pop() ?? this.create();
+  /** The documents each worker has evaluated (and so keeps a memo of), most recent last. */
+  private readonly documentsOf = new WeakMap<WorkerHandle, string[]>();
+
+  /**
+   * A worker for one job: an idle one if any (one that has evaluated `document` before, if there is one:
+   * it evaluates only what changed), else a new one. The caller listens to it.
+   */
+  take(document?: string): WorkerHandle {
+    const familiar = document === undefined ? -1 : this.idle.findIndex((w) => this.documentsOf.get(w)?.includes(document));
+    const worker = (familiar >= 0 ? this.idle.splice(familiar, 1)[0] : this.idle.pop()) ?? this.create();
     worker.listen(undefined);
+    if (document !== undefined) this.remember(worker, document);
     this.warm();
     return worker;
+  }
+
+  private remember(worker: WorkerHandle, document: string): void {
+    const documents = (this.documentsOf.get(worker) ?? []).filter((d) => d !== document);
+    documents.push(document);
+    // The worker keeps this many memos (./memo-shelf.ts); older documents are forgotten there too.
+    this.documentsOf.set(worker, documents.slice(-MEMOS_PER_WORKER));
   }
 
   /** A worker whose job is over and which is still healthy. */
@@ -97,7 +118,9 @@ export class WorkerPool {
 export function threadWorkerFactory(file: string): WorkerFactory {
   return () => {
     // The worker's standard output would otherwise share the server's, which may carry the protocol.
-    const worker = new Worker(file, { stdout: true });
+    const stopCell = new Int32Array(new SharedArrayBuffer(4));
+    const workerData: WorkerStartData = { stopCell: stopCell.buffer as SharedArrayBuffer };
+    const worker = new Worker(file, { stdout: true, workerData });
     worker.stdout.on('data', (chunk: Buffer) => process.stderr.write(chunk));
     // An idle worker must not keep the server process alive once the connection is gone.
     worker.unref();
@@ -117,6 +140,7 @@ export function threadWorkerFactory(file: string): WorkerFactory {
         listener = undefined;
         void worker.terminate();
       },
+      requestStop: (id) => Atomics.store(stopCell, 0, id),
     };
   };
 }
