@@ -154,8 +154,6 @@ export interface ServerResult {
   idleMiB: number | undefined;
   documents: DocumentResult[];
   bundles: { file: string; bytes: number }[];
-  quickPassDelayMs: number | undefined;
-  typingDelayMs: number | undefined;
 }
 
 /** Types a digit before the edit point, then deletes it, alternately; resolves with each keystroke's latency. */
@@ -191,18 +189,6 @@ async function hovers(session: Session, uri: string, doc: ReturnType<typeof gene
     latencies.push(performance.now() - started);
   }
   return latencies;
-}
-
-/** The debounce delays the server documents, read from its source when they are still there. */
-async function serverDelays(): Promise<{ quick: number | undefined; typing: number | undefined }> {
-  try {
-    const server = (await import('../server/src/lsp/server.js')) as Record<string, unknown>;
-    const quick = server['QUICK_PASS_DELAY_MS'];
-    const typing = server['EVALUATE_WHILE_TYPING_DELAY_MS'];
-    return { quick: typeof quick === 'number' ? quick : undefined, typing: typeof typing === 'number' ? typing : undefined };
-  } catch {
-    return { quick: undefined, typing: undefined };
-  }
 }
 
 export async function runServerBenchmark(options: ServerOptions, log: (line: string) => void): Promise<ServerResult> {
@@ -264,30 +250,16 @@ export async function runServerBenchmark(options: ServerOptions, log: (line: str
   for (const file of readdirSync(process.cwd()).filter((f) => f.endsWith('.vsix'))) {
     bundles.push({ file, bytes: statSync(join(process.cwd(), file)).size });
   }
-  const delays = await serverDelays();
-  return {
-    coldInitializeMs,
-    coldFirstDiagnosticsMs,
-    idleMiB,
-    documents,
-    bundles,
-    quickPassDelayMs: delays.quick,
-    typingDelayMs: delays.typing,
-  };
+  return { coldInitializeMs, coldFirstDiagnosticsMs, idleMiB, documents, bundles };
 }
 
 export function serverTables(result: ServerResult): string {
-  const delay = result.quickPassDelayMs;
-  const typingDelay = result.typingDelayMs;
-  const less = (x: number, d: number | undefined) => (d === undefined ? '–' : ms(x - d));
   const latency = markdownTable(
     [
       'lines',
       'open → diagnostics (ms)',
       'keystroke → diagnostics p50 / p95 (ms)',
-      `same, after the ${delay ?? '?'} ms pause p50 / p95`,
       'while typing (evaluateOn: type) p50 / p95 (ms)',
-      `same, after the ${typingDelay ?? '?'} ms pause p50 / p95`,
       'hover p50 / p95 (ms)',
       'resident memory (MiB)',
     ],
@@ -295,9 +267,7 @@ export function serverTables(result: ServerResult): string {
       `${d.lines}`,
       ms(d.openMs),
       `${ms(percentile(d.keystroke, 0.5))} / ${ms(percentile(d.keystroke, 0.95))}`,
-      `${less(percentile(d.keystroke, 0.5), delay)} / ${less(percentile(d.keystroke, 0.95), delay)}`,
       `${ms(percentile(d.typing, 0.5))} / ${ms(percentile(d.typing, 0.95))}`,
-      `${less(percentile(d.typing, 0.5), typingDelay)} / ${less(percentile(d.typing, 0.95), typingDelay)}`,
       `${ms(percentile(d.hover, 0.5))} / ${ms(percentile(d.hover, 0.95))}`,
       d.residentMiB === undefined ? '–' : d.residentMiB.toFixed(0),
     ]),

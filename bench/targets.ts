@@ -76,10 +76,10 @@ export function serverTargets(result: ServerResult): Target[] {
   const thousand = result.documents.find((d) => d.lines >= 900 && d.lines <= 1100);
   if (thousand) {
     const raw = p95(thousand.keystroke);
-    const delay = result.quickPassDelayMs;
+    const typing = p95(thousand.typing);
     out.push({
       target: 'keystroke → diagnostics p95 < 50 ms in a 1000-line file',
-      measured: `${ms(raw)} ms${delay === undefined ? '' : ` including the ${delay} ms pause the server waits for (${ms(raw - delay)} ms after it)`}`,
+      measured: `${ms(raw)} ms (quick pass); ${ms(typing)} ms re-evaluating the edited statement and its dependents (evaluateOn: type)`,
       met: raw < 50,
     });
   }

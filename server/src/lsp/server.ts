@@ -14,8 +14,9 @@
  *   reuses the statements the edit left alone), else ~150 ms after typing pauses; diagnostics pushed as
  *   described in ./documents.ts; hovers and lenses keep answering from the
  *   last evaluation, carried through the edits;
- * - change, with `wedgework.evaluateOn` = 'type': the running evaluation is cancelled and a full
- *   evaluation starts ~300 ms after typing pauses; with 'save', a running evaluation goes on and its
+ * - change, with `wedgework.evaluateOn` = 'type': the running evaluation is cancelled and a new
+ *   evaluation starts right away when the last one was cheap (the worker re-evaluates only what the
+ *   edit affects), else ~300 ms after typing pauses; with 'save', a running evaluation goes on and its
  *   results are carried through the edits made meanwhile;
  * - configuration change: every open document is evaluated again;
  * - after every evaluation: the client is asked to refresh its code lenses, if it supports that;
@@ -66,8 +67,13 @@ export const QUICK_PASS_DELAY_MS = 150;
  * together are still taken in one pass, since it runs after the pending messages.
  */
 export const CHEAP_QUICK_PASS_MS = 25;
-/** Delay after the last keystroke before evaluating, in 'type' mode. */
+/** Delay after the last keystroke before evaluating, in 'type' mode, when the last evaluation was not cheap. */
 export const EVALUATE_WHILE_TYPING_DELAY_MS = 300;
+/**
+ * In 'type' mode, an evaluation that took at most this long (the worker re-evaluates only the statements an
+ * edit affects, so most edits cost a few milliseconds) is followed by the next one right after each change.
+ */
+export const CHEAP_EVALUATION_MS = 40;
 
 const CONFIGURATION_SECTION = 'wedgework';
 
@@ -216,6 +222,14 @@ export function startServer(connection: Connection, options: ServerOptions = {})
     publish(entry);
   }
 
+  /** How long each document's last finished evaluation took in its worker, which decides when the next starts. */
+  const evaluationMs = new Map<string, number>();
+
+  function typingEvaluationDelay(uri: string): number {
+    const last = evaluationMs.get(uri);
+    return last !== undefined && last <= CHEAP_EVALUATION_MS ? 0 : EVALUATE_WHILE_TYPING_DELAY_MS;
+  }
+
   function quickPassDelay(uri: string): number {
     const last = quickPassMs.get(uri);
     return last !== undefined && last <= CHEAP_QUICK_PASS_MS ? 0 : QUICK_PASS_DELAY_MS;
@@ -278,6 +292,7 @@ export function startServer(connection: Connection, options: ServerOptions = {})
       return;
     }
     if (outcome.status === 'finished') {
+      evaluationMs.set(uri, outcome.elapsedMs);
       documents.recordEvaluation(entry, outcome.analysis, ticket);
     } else {
       documents.recordStopped(entry, text, unfinishedEvaluationProblem(outcome, text, timeoutMs)!, ticket);
@@ -340,7 +355,10 @@ export function startServer(connection: Connection, options: ServerOptions = {})
 
   connection.onDidOpenTextDocument(
     guard('opening the document', undefined, async ({ textDocument }) => {
-      documents.open(textDocument.uri, textDocument.languageId, textDocument.version, textDocument.text);
+      const entry = documents.open(textDocument.uri, textDocument.languageId, textDocument.version, textDocument.text);
+      // Parsed here once, so that the parser remembers the statements and the first keystroke's quick pass
+      // is already cheap (and known to be, see `quickPassDelay`); shown only if the evaluation takes long.
+      ensureQuickPass(entry);
       await evaluateGuarded(textDocument.uri);
     }),
   );
@@ -354,7 +372,7 @@ export function startServer(connection: Connection, options: ServerOptions = {})
       if (settings.evaluateOn === 'type') {
         // Its results would be replaced within moments; the thread is better spent on the new text.
         evaluations.cancel(uri);
-        timers.schedule(evaluateKey(uri), EVALUATE_WHILE_TYPING_DELAY_MS, () => void evaluateGuarded(uri));
+        timers.schedule(evaluateKey(uri), typingEvaluationDelay(uri), () => void evaluateGuarded(uri));
       } else {
         timers.schedule(quickKey(uri), quickPassDelay(uri), () => void quickPassGuarded(uri));
       }
@@ -377,6 +395,7 @@ export function startServer(connection: Connection, options: ServerOptions = {})
       documents.close(uri);
       settingsByUri.delete(uri);
       quickPassMs.delete(uri);
+      evaluationMs.delete(uri);
       void connection
         .sendDiagnostics({ uri, diagnostics: [] })
         .catch((error: unknown) => logFailure('clearing diagnostics', error));
