@@ -3,7 +3,16 @@
  * commands. Everything about the language itself happens in the server.
  */
 import * as vscode from 'vscode';
-import { LanguageClient, TransportKind, type LanguageClientOptions, type ServerOptions } from 'vscode-languageclient/node';
+import {
+  CloseAction,
+  ErrorAction,
+  LanguageClient,
+  TransportKind,
+  type ErrorHandler,
+  type LanguageClientOptions,
+  type ServerOptions,
+} from 'vscode-languageclient/node';
+import { RestartPolicy } from './restart-policy.js';
 import { registerResultsView } from './results-view.js';
 import { exportLatex } from './export-latex.js';
 
@@ -40,11 +49,25 @@ export async function activate(context: vscode.ExtensionContext): Promise<void> 
       options: { execArgv: ['--enable-source-maps', '--nolazy', '--inspect=6009'] },
     },
   };
+  const restarts = new RestartPolicy();
+  // A crashed server is started again a bounded number of times, and the user is told each time (./restart-policy.ts).
+  const errorHandler: ErrorHandler = {
+    // A message the connection could not read or write: keep going, the next one may be fine.
+    error: () => ({ action: ErrorAction.Continue }),
+    closed: () => {
+      const decision = restarts.closed();
+      outputChannel.error(decision.message);
+      if (decision.restart) void vscode.window.showWarningMessage(decision.message);
+      else void vscode.window.showErrorMessage(decision.message);
+      return { action: decision.restart ? CloseAction.Restart : CloseAction.DoNotRestart, handled: true };
+    },
+  };
   const clientOptions: LanguageClientOptions = {
     // No scheme: files, untitled editors and virtual workspaces alike.
     documentSelector: [{ language: 'wedge' }],
     outputChannel,
     traceOutputChannel,
+    errorHandler,
   };
   client = new LanguageClient('wedgework', 'Wedgework', serverOptions, clientOptions);
   // The results view (./results-view.ts) declares a client capability, so it is added before the start.
@@ -55,6 +78,7 @@ export async function activate(context: vscode.ExtensionContext): Promise<void> 
     vscode.commands.registerCommand(EXPORT_LATEX_COMMAND, () => exportLatex(client)),
     vscode.commands.registerCommand(RESTART_SERVER_COMMAND, async () => {
       if (!client) return;
+      restarts.reset();
       await client.restart();
       vscode.window.setStatusBarMessage('Wedgework: language server restarted', 3000);
     }),
