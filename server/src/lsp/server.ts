@@ -320,8 +320,6 @@ export function startServer(connection: Connection, options: ServerOptions = {})
       clientRefreshesCodeLenses = workspace?.codeLens?.refreshSupport === true;
       clientWantsResults = params.capabilities.experimental?.[RESULTS_CAPABILITY] === true;
       pushedSettings = parseSettings(params.initializationOptions);
-      // Load the language layer into a worker now, so the first evaluation does not wait for it.
-      workers.warm();
       const result: InitializeResult = {
         capabilities: SERVER_CAPABILITIES,
         serverInfo: { name: 'wedgework', version: packageJson.version },
@@ -332,6 +330,9 @@ export function startServer(connection: Connection, options: ServerOptions = {})
 
   connection.onInitialized(
     guard('registering for configuration changes', undefined, async () => {
+      // Load the language layer into a worker now, so the first evaluation does not wait for it; not before
+      // `initialize` is answered, since starting a thread would only delay that answer.
+      workers.warm();
       if (clientRegistersConfigurationChange) {
         await connection.client.register(DidChangeConfigurationNotification.type, { section: CONFIGURATION_SECTION });
       }
