@@ -4,7 +4,8 @@
  * arrays of random numbers of the same kind and size, and nothing else. The
  * time of the walk above this is what its bookkeeping costs.
  */
-import { dot3Mod, dot4Mod, dotMod, mulAddMod, mulMod } from '../server/src/engine/modular-arithmetic.js';
+// The kernels the walks use (branch-free last step), so that the floor does the same operations.
+import { dot3Mod, dot4Mod, dotMod, mulAddMod, mulMod } from '../server/src/engine/plucker-modular-kernels.js';
 import type { ModularWalkCounts } from '../server/src/engine/plucker-modular.js';
 import type { FractionFreeCounts } from '../server/src/engine/plucker-fraction-free.js';
 import { Random } from './random.js';

@@ -4,10 +4,10 @@
  * and against the arithmetic floor of what our walk computes.
  */
 import type { Field } from '../server/src/engine/field.js';
-import { pluckerCoordinates } from '../server/src/engine/plucker.js';
-import { emptyModularWalkCounts, pluckerModular } from '../server/src/engine/plucker-modular.js';
+import { pluckerCoordinates, pluckerCoordinatesScaled, pluckerResiduesModP } from '../server/src/engine/plucker.js';
+import { emptyModularWalkCounts, pluckerResidues } from '../server/src/engine/plucker-modular.js';
 import { emptyMultimodularReport } from '../server/src/engine/plucker-multimodular.js';
-import { pluckerRational, type RationalMethod } from '../server/src/engine/plucker-rational.js';
+import { pluckerRationalScaled, type RationalMethod } from '../server/src/engine/plucker-rational.js';
 import { pluckerFractionFree, type FractionFreeCounts } from '../server/src/engine/plucker-fraction-free.js';
 import { primeField } from '../server/src/engine/prime-field.js';
 import { QQ, rational, type Rational } from '../server/src/engine/rational.js';
@@ -55,7 +55,10 @@ export interface PluckerResult {
   k: number;
   n: number;
   coordinates: number;
+  /** Time of the compact result (Int32Array of residues; numerators over one denominator). */
   oursMs: number;
+  /** Time of `pluckerCoordinates`, which returns the field's elements in a plain array. */
+  elementsMs: number;
   /** baseline time / our time (how many times faster we are). */
   vsGeneric: number;
   vsBareiss: number;
@@ -105,7 +108,9 @@ function benchOne(kind: EntryKind, k: number, n: number, options: BenchOptions, 
     const F = primeField(BigInt(BENCH_PRIME)) as Field<number>;
     const rows = reduce(integers, BENCH_PRIME);
     const generic = { ...F };
-    const ours = pluckerCoordinates(F, rows, n);
+    const ours = pluckerResiduesModP(F, rows, n);
+    const elements = pluckerCoordinates(F, rows, n);
+    if (elements.some((x, i) => x !== ours[i])) throw new Error('pluckerCoordinates and pluckerResiduesModP disagree');
     // The baselines must agree with us where they are timed (spot check on the sample).
     const big = BigInt(BENCH_PRIME);
     sample.slice(0, 3).forEach((cols) => {
@@ -115,11 +120,12 @@ function benchOne(kind: EntryKind, k: number, n: number, options: BenchOptions, 
       if (Number(((exact % big) + big) % big) !== ours[at]) throw new Error(`mathjs disagrees at ${cols}`);
     });
     const counts = emptyModularWalkCounts();
-    pluckerModular(rows, n, BENCH_PRIME, counts);
+    pluckerResidues(rows, n, BENCH_PRIME, counts);
     floor = modularFloor(counts, BENCH_PRIME);
     notes.push(`${counts.inversions} inversions`);
     contenders = [
-      { name: 'ours', run: () => pluckerCoordinates(F, rows, n) },
+      { name: 'ours', run: () => pluckerResiduesModP(F, rows, n) },
+      { name: 'elements', run: () => pluckerCoordinates(F, rows, n) },
       { name: 'generic', run: () => pluckerCoordinates(generic, rows, n) },
       perMinor('bareiss', sample, total, (cols) => bareissMinorModular(rows, cols, BENCH_PRIME)),
       perMinor('mathjs', sample, total, (cols) => {
@@ -131,6 +137,11 @@ function benchOne(kind: EntryKind, k: number, n: number, options: BenchOptions, 
   } else {
     const rows: Rational[][] = integers.map((row) => row.map((x) => rational(x)));
     const ours = pluckerCoordinates(QQ, rows, n);
+    const scaled = pluckerCoordinatesScaled(rows, n);
+    // Integer entries: the denominator is 1 and the numerators are the minors.
+    if (scaled.denominator !== 1n || ours.some((x, i) => BigInt(scaled.numerators[i]!) !== x.num)) {
+      throw new Error('pluckerCoordinates and pluckerCoordinatesScaled disagree');
+    }
     sample.slice(0, 3).forEach((cols) => {
       const at = rankOf(cols, n);
       if (bareissMinor(integers, cols) !== ours[at]!.num) throw new Error(`Bareiss disagrees at ${cols}`);
@@ -138,7 +149,7 @@ function benchOne(kind: EntryKind, k: number, n: number, options: BenchOptions, 
     });
     const report = emptyMultimodularReport();
     const chosen: RationalMethod[] = [];
-    pluckerRational(rows, n, (m) => chosen.push(m), report);
+    pluckerRationalScaled(rows, n, (m) => chosen.push(m), report);
     const method = chosen[0]!;
     const entryBits = meanBits(integers);
     if (method === 'two rows' || method === 'three rows') {
@@ -159,7 +170,8 @@ function benchOne(kind: EntryKind, k: number, n: number, options: BenchOptions, 
       notes.push(`fraction-free on bigints (bound ${Math.round(boundBitsOf(integers))} bits)`);
     }
     contenders = [
-      { name: 'ours', run: () => pluckerCoordinates(QQ, rows, n) },
+      { name: 'ours', run: () => pluckerCoordinatesScaled(rows, n) },
+      { name: 'elements', run: () => pluckerCoordinates(QQ, rows, n) },
       { name: 'generic', run: () => pluckerFractionFree(rows, n) },
       perMinor('bareiss', sample, total, (cols) => ({ num: bareissMinor(integers, cols), den: 1n })),
       perMinor('mathjs', sample, total, (cols) => mathjsMinor(fractions, cols)),
@@ -180,6 +192,7 @@ function benchOne(kind: EntryKind, k: number, n: number, options: BenchOptions, 
     n,
     coordinates: total,
     oursMs,
+    elementsMs: result.times.get('elements')!,
     vsGeneric: 1 / result.ratios.get('generic')!,
     vsBareiss: 1 / result.ratios.get('bareiss')!,
     vsMathjs: 1 / result.ratios.get('mathjs')!,
@@ -243,13 +256,14 @@ export function runPluckerBenchmark(options: BenchOptions, log: (line: string) =
 
 export function pluckerTable(results: readonly PluckerResult[]): string {
   return markdownTable(
-    ['field', 'G(k,n)', 'coords', 'ours (ms)', 'per coord', '× generic walk', '× Bareiss/minor', '× mathjs/minor', 'floor (ms)', 'ours / floor', 'notes'],
+    ['field', 'G(k,n)', 'coords', 'ours (ms)', 'per coord', 'as elements (ms)', '× generic walk', '× Bareiss/minor', '× mathjs/minor', 'floor (ms)', 'ours / floor', 'notes'],
     results.map((r) => [
       r.kind,
       `G(${r.k},${r.n})`,
       `${r.coordinates}`,
       ms(r.oursMs),
       nanoseconds((r.oursMs * 1e6) / r.coordinates),
+      ms(r.elementsMs),
       times(r.vsGeneric),
       times(r.vsBareiss),
       times(r.vsMathjs),

@@ -2,7 +2,7 @@ import { test, describe } from 'node:test';
 import assert from 'node:assert/strict';
 import fc from 'fast-check';
 import type { Field } from '../../server/src/engine/field.js';
-import { pluckerCoordinates } from '../../server/src/engine/plucker.js';
+import { pluckerCoordinates, pluckerCoordinatesScaled, scaledCoordinate } from '../../server/src/engine/plucker.js';
 import { pluckerFractionFree } from '../../server/src/engine/plucker-fraction-free.js';
 import { MULTIMODULAR_PRIME_LIMIT, hadamardBoundSquared, pluckerMultimodular, primesNeeded } from '../../server/src/engine/plucker-multimodular.js';
 import { primeField, smallPrimeModulus } from '../../server/src/engine/prime-field.js';
@@ -124,7 +124,7 @@ describe('QQ: the multimodular path against the fraction-free walk and mathjs', 
   });
 
   test('beyond the prime limit the multimodular path declines and pluckerCoordinates falls back (mathjs det)', () => {
-    const rows = [0, 1, 2, 3].map((i) => Array.from({ length: 7 }, (_, j) => rational(2n ** 62n + BigInt(31 * i + 7 * j * j) - 2n ** 61n * BigInt(j % 3))));
+    const rows = [0, 1, 2, 3].map((i) => Array.from({ length: 7 }, (_, j) => rational(2n ** 92n + BigInt(31 * i + 7 * j * j) - 2n ** 91n * BigInt(j % 3))));
     assert.ok(primesNeeded(hadamardBoundSquared(rows.map((r) => r.map((x) => x.num)))) > MULTIMODULAR_PRIME_LIMIT);
     assert.equal(pluckerMultimodular(rows, 7), undefined);
     const ours = pluckerCoordinates(QQ, rows, 7);
@@ -170,6 +170,10 @@ describe('QQ: minors exactly at Hadamard’s bound, at each switch of the recons
       assert.equal(first.num < 0n ? -first.num : first.num, bound);
       const reference = pluckerFractionFree(rows, n);
       assertSame(ours, reference, `k = ${k}, scale ${c}`);
+      // The compact result too: doubles below 2^52, bigints above, at each switch.
+      const scaled = pluckerCoordinatesScaled(rows, n);
+      assertSame(Array.from({ length: ours.length }, (_, r) => scaledCoordinate(scaled, r)), reference, `k = ${k}, scale ${c}, scaled`);
+      if (scaled.numerators instanceof Float64Array) assert.ok(bound < 2n ** 53n);
       // The multimodular path itself, whichever method pluckerCoordinates chose for this shape.
       const modular = pluckerMultimodular(rows, n, undefined, 1000);
       assert.ok(modular !== undefined);

@@ -10,7 +10,7 @@
  * elements 0, 1, …, q − 1 itself.
  */
 import type { Field } from './field.js';
-import { extensionField, type FiniteField } from './extension-field.js';
+import { extensionField, FieldOrderLimitError, type FiniteField } from './extension-field.js';
 import { primePowerDecomposition } from './integer-factors.js';
 import { NotPrimeError, primeField } from './prime-field.js';
 
@@ -30,13 +30,44 @@ export class NotPrimePowerError extends NotPrimeError {
 }
 
 /**
+ * The largest bit length of a field order: GF(q) needs q < 2^512.
+ *
+ * Recognising q as a prime power costs one integer root per possible exponent
+ * and then Miller–Rabin rounds whose cost grows with the cube of the bit
+ * length: about 0.2 s at 512 bits, over a second at 1024, over a minute for a
+ * 10^4-digit q and hours for a 10^5-digit one, all before a single element
+ * exists (found by fuzzing a file with `field GF(…)` of a long number). Orders
+ * past the bound are refused at once; primes of 150 digits stay usable.
+ */
+export const FIELD_ORDER_BIT_LIMIT = 512;
+
+/**
+ * Raised by `finiteField` for an order of more than `FIELD_ORDER_BIT_LIMIT`
+ * bits. It is a kind of `FieldOrderLimitError`, so callers that report that
+ * limit report this one too, with this message.
+ */
+export class FieldOrderSizeError extends FieldOrderLimitError {
+  constructor(order: bigint) {
+    const digits = order.toString().length;
+    super(digits <= 40 ? String(order) : `a number of ${digits} digits`);
+    this.message =
+      `GF(q) needs q < 2^${FIELD_ORDER_BIT_LIMIT}: this order has ${order.toString(2).length} bits (${digits} digits), ` +
+      'and deciding whether so large a number is a prime power would take too long';
+    this.name = 'FieldOrderSizeError';
+  }
+}
+
+/**
  * The field with q elements: the prime field when q is prime, the extension
  * field of `extensionField` (generator named `a`) when q = p^m with m ≥ 2.
- * Throws `NotPrimePowerError` when q is not a prime power and
- * `FieldOrderLimitError` for a proper prime power above 2^20. Prime fields have
- * no such limit.
+ * Throws `NotPrimePowerError` when q is not a prime power,
+ * `FieldOrderLimitError` for a proper prime power above 2^20, and
+ * `FieldOrderSizeError` (a kind of `FieldOrderLimitError`) for any q of more
+ * than `FIELD_ORDER_BIT_LIMIT` bits.
  */
 export function finiteField(q: bigint, options?: { generator?: string }): Field<any> {
+  // The size is checked first: the prime-power test below is what takes too long on huge orders.
+  if (q >= 2n ** BigInt(FIELD_ORDER_BIT_LIMIT)) throw new FieldOrderSizeError(q);
   const decomposition = primePowerDecomposition(q);
   if (decomposition === undefined) throw new NotPrimePowerError(q);
   const { prime, exponent } = decomposition;

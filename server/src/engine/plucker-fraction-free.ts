@@ -46,63 +46,70 @@ export function clearDenominators(rows: readonly (readonly Rational[])[]): { int
   return { integers, scale };
 }
 
-/**
- * The 2×2 minors a_i·b_j − a_j·b_i of a rational 2×n matrix, on the integers
- * after clearing denominators: what the walk computes for two rows, without
- * its bookkeeping (for so few products that is most of the cost).
- */
-export function pluckerTwoRows(rows: readonly (readonly Rational[])[], n: number): Rational[] {
-  const { integers, scale } = clearDenominators(rows);
-  const a = integers[0]!;
-  const b = integers[1]!;
-  const out: Rational[] = [];
+/** m / scale as a rational in lowest terms (scale > 0). */
+export function scaledRational(m: bigint, scale: bigint): Rational {
+  return m === 0n ? QQ.zero : scale === 1n ? { num: m, den: 1n } : QQ.fromRational(m, scale);
+}
+
+/** The 2×2 minors a_i·b_j − a_j·b_i of the integer rows a, b, in lexicographic order of {i, j}. */
+export function twoRowMinors(a: readonly bigint[], b: readonly bigint[], n: number): bigint[] {
+  const out = new Array<bigint>((n * (n - 1)) / 2);
+  let index = 0;
   for (let i = 0; i < n; i++) {
-    for (let j = i + 1; j < n; j++) {
-      const m = a[i]! * b[j]! - a[j]! * b[i]!;
-      out.push(m === 0n ? QQ.zero : scale === 1n ? { num: m, den: 1n } : QQ.fromRational(m, scale));
-    }
+    const ai = a[i]!;
+    const bi = b[i]!;
+    for (let j = i + 1; j < n; j++) out[index++] = ai * b[j]! - a[j]! * bi;
   }
   return out;
 }
 
 /**
- * The 3×3 minors of a rational 3×n matrix with rows a, b, c, on the integers
- * after clearing denominators, expanded along a: a_x·M(y,z) − a_y·M(x,z) +
- * a_z·M(x,y), where M are the 2×2 minors of b and c, each found once
- * (Laplace expansion). Three products per coordinate and two per pair of
- * columns, fewer than the walk's eliminations.
+ * The 3×3 minors of the integer rows a, b, c, expanded along a:
+ * a_x·M(y,z) − a_y·M(x,z) + a_z·M(x,y), where M are the 2×2 minors of b and
+ * c, each found once (Laplace expansion). Three products per coordinate and
+ * two per pair of columns, fewer than the walk's eliminations.
  */
-export function pluckerThreeRows(rows: readonly (readonly Rational[])[], n: number): Rational[] {
-  const { integers, scale } = clearDenominators(rows);
-  const [a, b, c] = integers as [bigint[], bigint[], bigint[]];
+export function threeRowMinors(a: readonly bigint[], b: readonly bigint[], c: readonly bigint[], n: number): bigint[] {
   const minors: bigint[] = new Array<bigint>(n * n).fill(0n);
   for (let y = 0; y < n; y++) {
     for (let z = y + 1; z < n; z++) minors[y * n + z] = b[y]! * c[z]! - b[z]! * c[y]!;
   }
-  const out: Rational[] = [];
+  const out = new Array<bigint>((n * (n - 1) * (n - 2)) / 6);
+  let index = 0;
   for (let x = 0; x < n; x++) {
     for (let y = x + 1; y < n; y++) {
       const mxy = minors[x * n + y]!;
-      for (let z = y + 1; z < n; z++) {
-        const m = a[x]! * minors[y * n + z]! - a[y]! * minors[x * n + z]! + a[z]! * mxy;
-        out.push(m === 0n ? QQ.zero : scale === 1n ? { num: m, den: 1n } : QQ.fromRational(m, scale));
-      }
+      for (let z = y + 1; z < n; z++) out[index++] = a[x]! * minors[y * n + z]! - a[y]! * minors[x * n + z]! + a[z]! * mxy;
     }
   }
   return out;
 }
 
-/** All C(n, k) maximal minors of the rational k×n matrix `rows` (k ≥ 1), by fraction-free elimination. */
-export function pluckerFractionFree(
-  rows: readonly (readonly Rational[])[],
-  n: number,
-  counts?: FractionFreeCounts,
-): Rational[] {
-  const k = rows.length;
-  const out = new Array<Rational>(binomial(n, k)).fill(QQ.zero);
+/**
+ * The 2×2 minors of a rational 2×n matrix, on the integers after clearing
+ * denominators: what the walk computes for two rows, without its bookkeeping
+ * (for so few products that is most of the cost).
+ */
+export function pluckerTwoRows(rows: readonly (readonly Rational[])[], n: number): Rational[] {
   const { integers, scale } = clearDenominators(rows);
+  return twoRowMinors(integers[0]!, integers[1]!, n).map((m) => scaledRational(m, scale));
+}
+
+/** The 3×3 minors of a rational 3×n matrix, on the integers after clearing denominators (`threeRowMinors`). */
+export function pluckerThreeRows(rows: readonly (readonly Rational[])[], n: number): Rational[] {
+  const { integers, scale } = clearDenominators(rows);
+  return threeRowMinors(integers[0]!, integers[1]!, integers[2]!, n).map((m) => scaledRational(m, scale));
+}
+
+/**
+ * All C(n, k) maximal minors of the integer k×n matrix `integers` (k ≥ 1),
+ * by fraction-free elimination, in lexicographic order of their column sets.
+ */
+export function fractionFreeMinors(integers: readonly (readonly bigint[])[], n: number, counts?: FractionFreeCounts): bigint[] {
+  const k = integers.length;
+  const out = new Array<bigint>(binomial(n, k)).fill(0n);
   let index = 0;
-  walkColumnSets<bigint, BareissState>(k, n, integers, { negative: false, previous: 1n }, {
+  walkColumnSets<bigint, BareissState>(k, n, integers.map((row) => row.slice()), { negative: false, previous: 1n }, {
     isZero: (e) => e === 0n,
     eliminate(level, count, q, c, width, state, next) {
       const pivotRow = level[q]!;
@@ -131,11 +138,21 @@ export function pluckerFractionFree(
       return { negative: q % 2 === 0 ? state.negative : !state.negative, previous: pivot };
     },
     leaf(state, entry) {
-      out[index++] = QQ.fromRational(state.negative ? -entry : entry, scale);
+      out[index++] = state.negative ? -entry : entry;
     },
     zeros(count) {
       index += count;
     },
   });
   return out;
+}
+
+/** All C(n, k) maximal minors of the rational k×n matrix `rows` (k ≥ 1), by fraction-free elimination. */
+export function pluckerFractionFree(
+  rows: readonly (readonly Rational[])[],
+  n: number,
+  counts?: FractionFreeCounts,
+): Rational[] {
+  const { integers, scale } = clearDenominators(rows);
+  return fractionFreeMinors(integers, n, counts).map((m) => scaledRational(m, scale));
 }

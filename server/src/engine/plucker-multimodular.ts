@@ -16,8 +16,9 @@
  * Exactness does not depend on a pivot being nonzero modulo p: the walk modulo
  * p computes every minor modulo p correctly whatever vanishes there.
  */
-import { MODULAR_LIMIT, invMod, mulMod } from './modular-arithmetic.js';
-import { emptyModularWalkCounts, pluckerModular, type ModularWalkCounts } from './plucker-modular.js';
+import { MODULAR_LIMIT, invMod } from './modular-arithmetic.js';
+import { mulMod } from './plucker-modular-kernels.js';
+import { emptyModularWalkCounts, pluckerResidues, zeroDoubles, type ModularWalkCounts } from './plucker-modular.js';
 import { clearDenominators } from './plucker-fraction-free.js';
 import { QQ, type Rational } from './rational.js';
 import { binomial } from './subsets.js';
@@ -26,10 +27,12 @@ import { binomial } from './subsets.js';
  * Beyond this many primes the fraction-free bigint walk is faster: each
  * coordinate then costs r bigint conversions and multiplications to rebuild,
  * and the walk runs r times, while bigint arithmetic on numbers of a few limbs
- * costs little more than on one limb. Measured at G(8,16) and G(10,20) with
- * entries of 4 to 48 bits (the crossing is at 6 to 8 primes).
+ * costs little more than on one limb. Measured side by side at G(8,16) and
+ * G(10,20) with entries of 12 to 44 bits, after the walk's kernels became
+ * branch-free: the multimodular path was 1.3–1.8× faster up to 9 primes, 1.1×
+ * at 10 and 11, even at 12 (before, the crossing was at 6 to 8 primes).
  */
-export const MULTIMODULAR_PRIME_LIMIT = 6;
+export const MULTIMODULAR_PRIME_LIMIT = 10;
 
 /** Below this many coordinates, three primes or more are not worth their setup. */
 export const MULTIMODULAR_MINIMUM_OUTPUT = 4096;
@@ -88,27 +91,63 @@ export function primesNeeded(boundSquared: bigint): number {
 /** H² = ∏_i Σ_j a_ij², the square of Hadamard's bound for every maximal minor. */
 export function hadamardBoundSquared(integers: readonly (readonly bigint[])[]): bigint {
   let bound = 1n;
-  for (const row of integers) {
-    let length = 0n;
-    for (const x of row) length += x * x;
-    bound *= length;
-  }
+  for (const row of integers) bound *= squaredLength(row);
   return bound;
 }
 
-function residues(integers: readonly (readonly bigint[])[], p: number): number[][] {
-  const big = BigInt(p);
+/**
+ * Σ_j x_j², on numbers when that is exact: entries of at most 2^20 in absolute
+ * value, at most 2^12 of them, keep every partial sum below 2^52 (converting
+ * a bigint to a number is exact below 2^53, and rounds to at least 2^53
+ * above, so the test on the converted value is sound).
+ */
+function squaredLength(row: readonly bigint[]): bigint {
+  if (row.length <= 4096) {
+    let length = 0;
+    let small = true;
+    for (const x of row) {
+      const v = Number(x);
+      if (v > 1048576 || v < -1048576) {
+        small = false;
+        break;
+      }
+      length += v * v;
+    }
+    if (small) return BigInt(length);
+  }
+  let length = 0n;
+  for (const x of row) length += x * x;
+  return length;
+}
+
+/** The entries as numbers when they are exact as numbers (below 2^53 in absolute value), else undefined. */
+function entriesAsNumbers(integers: readonly (readonly bigint[])[]): (number | undefined)[][] {
   return integers.map((row) =>
     row.map((x) => {
-      // Entries that are exact numbers are reduced without bigint division.
-      if (x >= -9007199254740991n && x <= 9007199254740991n) {
-        const r = Number(x) % p;
+      // Exact below 2^53; a larger bigint converts to at least 2^53 in absolute value.
+      const v = Number(x);
+      return v < 9007199254740992 && v > -9007199254740992 ? v : undefined;
+    }),
+  );
+}
+
+function residues(integers: readonly (readonly bigint[])[], numbers: readonly (readonly (number | undefined)[])[], p: number): number[][] {
+  const big = BigInt(p);
+  return integers.map((row, i) => {
+    const exact = numbers[i]!;
+    return row.map((x, j) => {
+      // Entries that are exact numbers are reduced without bigint division (small ones without any division).
+      const v = exact[j];
+      if (v !== undefined) {
+        if (v >= 0) return v < p ? v : v % p;
+        if (v > -p) return v + p;
+        const r = v % p;
         return r < 0 ? r + p : r;
       }
       const r = Number(x % big);
       return r < 0 ? r + p : r;
-    }),
-  );
+    });
+  });
 }
 
 const SMALL_INTEGERS: bigint[] = Array.from({ length: 2049 }, (_, i) => BigInt(i - 1024));
@@ -119,29 +158,28 @@ function toBigInt(m: number): bigint {
 }
 
 /**
- * All C(n, k) maximal minors of the rational k×n matrix `rows` (k ≥ 1), or
- * undefined when more than `primeLimit` primes would be needed, or (with the
- * default limit) three or more for fewer than `MULTIMODULAR_MINIMUM_OUTPUT`
- * coordinates. `report`, when given, is filled in.
+ * The integer minors of one matrix, all of them below 2^53 in absolute value
+ * (safe integers, exact as doubles) or not known to be.
  */
-export function pluckerMultimodular(
-  rows: readonly (readonly Rational[])[],
+export type IntegerMinors = Float64Array | bigint[];
+
+/**
+ * All C(n, k) maximal minors of the integer k×n matrix `integers` (k ≥ 1),
+ * given H² (`boundSquared`, Hadamard's bound squared) and r = primesNeeded(H²)
+ * primes, in lexicographic order of their column sets. When H < 2^52 they come
+ * as doubles (so no bigint is made per coordinate), otherwise as bigints.
+ */
+export function multimodularMinors(
+  integers: readonly (readonly bigint[])[],
   n: number,
+  boundSquared: bigint,
+  r: number,
   report?: MultimodularReport,
-  primeLimit: number = MULTIMODULAR_PRIME_LIMIT,
-): Rational[] | undefined {
-  const { integers, scale } = clearDenominators(rows);
-  const boundSquared = hadamardBoundSquared(integers);
-  const r = primesNeeded(boundSquared);
-  if (r > primeLimit) return undefined;
-  // With three primes or more, rebuilding each coordinate costs bigint arithmetic of its own; for few
-  // coordinates the setup is not repaid (measured at G(2,8) to G(5,15)).
-  if (r > 2 && binomial(n, rows.length) < MULTIMODULAR_MINIMUM_OUTPUT && primeLimit === MULTIMODULAR_PRIME_LIMIT) return undefined;
+): IntegerMinors {
   const moduli = Array.from({ length: r }, (_, i) => modularPrime(i));
-  const images = moduli.map((p) => pluckerModular(residues(integers, p), n, p, report?.walk));
+  const numbers = entriesAsNumbers(integers);
+  const images = moduli.map((p) => pluckerResidues(residues(integers, numbers, p), n, p, report?.walk));
   const count = images[0]!.length;
-  const out = new Array<Rational>(count);
-  const finish = (m: bigint): Rational => (m === 0n ? QQ.zero : scale === 1n ? { num: m, den: 1n } : QQ.fromRational(m, scale));
   if (report !== undefined) {
     report.primes = r;
     report.boundBits = boundSquared === 0n ? 0 : Math.ceil(boundSquared.toString(2).length / 2);
@@ -150,10 +188,13 @@ export function pluckerMultimodular(
   if (r === 1) {
     // |m| ≤ H < p/2: the symmetric residue is m.
     const p = moduli[0]!;
+    const half = (p - 1) / 2;
     const x = images[0]!;
+    const out = zeroDoubles(count);
+    // v − p when v > (p − 1)/2, without a branch: half − v is negative exactly then (all within 32 bits).
     for (let i = 0; i < count; i++) {
       const v = x[i]!;
-      out[i] = finish(toBigInt(v > p / 2 ? v - p : v));
+      out[i] = v - (p & ((half - v) >> 31));
     }
     return out;
   }
@@ -173,14 +214,22 @@ export function pluckerMultimodular(
     const x0 = images[0]!;
     const x1 = images[1]!;
     const half = (p1 - 1) / 2;
+    const out = zeroDoubles(count);
+    // The residues are random, so the signs tested below would be mispredicted branches half of the
+    // time; they are taken from sign bits instead (every quantity is within 32 bits).
     for (let i = 0; i < count; i++) {
       const v0 = x0[i]!;
-      let d = x1[i]! - (v0 % p1);
-      if (d < 0) d += p1;
+      // v_0 < p_0 < 2·p_1, so v_0 mod p_1 is v_0 or v_0 − p_1 (rarely: p_0 − p_1 is tiny).
+      let d = x1[i]! - (v0 >= p1 ? v0 - p1 : v0);
+      d += (d >> 31) & p1;
       let t = mulMod(d, inverse, p1, reciprocal);
       // The representative of m with |m| < P/2: t > (p_1−1)/2, or t = (p_1−1)/2 with v_0 > p_0/2, means m − P.
-      if (t > half || (t === half && 2 * v0 > p0)) t -= p1;
-      out[i] = finish(toBigInt(v0 + p0 * t));
+      if (t === half) {
+        if (2 * v0 > p0) t -= p1;
+      } else {
+        t -= p1 & ((half - t) >> 31);
+      }
+      out[i] = v0 + p0 * t;
     }
     return out;
   }
@@ -191,6 +240,7 @@ export function pluckerMultimodular(
   for (const p of bigModuli) modulus *= p;
   const halfModulus = modulus / 2n;
   const digits = new Float64Array(r);
+  const out = new Array<bigint>(count);
   if (report !== undefined) report.reconstructionBigint += count * (r - 1);
   for (let i = 0; i < count; i++) {
     let allZero = true;
@@ -201,7 +251,7 @@ export function pluckerMultimodular(
       }
     }
     if (allZero) {
-      out[i] = QQ.zero;
+      out[i] = 0n;
       continue;
     }
     for (let s = 0; s < r; s++) {
@@ -209,7 +259,9 @@ export function pluckerMultimodular(
       const reciprocal = reciprocals[s]!;
       let t = images[s]![i]!;
       for (let j = 0; j < s; j++) {
-        let d = t - (digits[j]! % p);
+        // digits[j] < p_j < 2·p_s (the primes are descending and close to 2^31), so one subtraction reduces it.
+        const digit = digits[j]!;
+        let d = t - (digit >= p ? digit - p : digit);
         if (d < 0) d += p;
         t = mulMod(d, inverses[j]![s]!, p, reciprocal);
       }
@@ -217,7 +269,57 @@ export function pluckerMultimodular(
     }
     let m = BigInt(digits[r - 1]!);
     for (let s = r - 2; s >= 0; s--) m = m * bigModuli[s]! + BigInt(digits[s]!);
-    out[i] = finish(m > halfModulus ? m - modulus : m);
+    out[i] = m > halfModulus ? m - modulus : m;
+  }
+  return out;
+}
+
+/** The clearing of denominators, Hadamard's bound and the number of primes of one rational matrix. */
+export interface MultimodularPlan {
+  integers: bigint[][];
+  scale: bigint;
+  boundSquared: bigint;
+  primes: number;
+}
+
+/**
+ * The plan for `rows`, or undefined when more than `primeLimit` primes would
+ * be needed, or (with the default limit) three or more for fewer than
+ * `MULTIMODULAR_MINIMUM_OUTPUT` coordinates.
+ */
+export function multimodularPlan(rows: readonly (readonly Rational[])[], n: number, primeLimit: number = MULTIMODULAR_PRIME_LIMIT): MultimodularPlan | undefined {
+  const { integers, scale } = clearDenominators(rows);
+  const boundSquared = hadamardBoundSquared(integers);
+  const r = primesNeeded(boundSquared);
+  if (r > primeLimit) return undefined;
+  // With three primes or more, rebuilding each coordinate costs bigint arithmetic of its own; for few
+  // coordinates the setup is not repaid (measured at G(2,8) to G(5,15)).
+  if (r > 2 && binomial(n, rows.length) < MULTIMODULAR_MINIMUM_OUTPUT && primeLimit === MULTIMODULAR_PRIME_LIMIT) return undefined;
+  return { integers, scale, boundSquared, primes: r };
+}
+
+/**
+ * All C(n, k) maximal minors of the rational k×n matrix `rows` (k ≥ 1), or
+ * undefined when the plan declines (see `multimodularPlan`). `report`, when
+ * given, is filled in.
+ */
+export function pluckerMultimodular(
+  rows: readonly (readonly Rational[])[],
+  n: number,
+  report?: MultimodularReport,
+  primeLimit: number = MULTIMODULAR_PRIME_LIMIT,
+): Rational[] | undefined {
+  const plan = multimodularPlan(rows, n, primeLimit);
+  if (plan === undefined) return undefined;
+  const minors = multimodularMinors(plan.integers, n, plan.boundSquared, plan.primes, report);
+  const scale = plan.scale;
+  const count = minors.length;
+  const out = new Array<Rational>(count);
+  const finish = (m: bigint): Rational => (m === 0n ? QQ.zero : scale === 1n ? { num: m, den: 1n } : QQ.fromRational(m, scale));
+  if (minors instanceof Float64Array) {
+    for (let i = 0; i < count; i++) out[i] = finish(toBigInt(minors[i]!));
+  } else {
+    for (let i = 0; i < count; i++) out[i] = finish(minors[i]!);
   }
   return out;
 }

@@ -19,12 +19,16 @@
 import type { Field } from './field.js';
 import { determinant } from './matrix.js';
 import { fromDense, type Multivector } from './multivector.js';
-import { pluckerModular } from './plucker-modular.js';
-import { pluckerRational } from './plucker-rational.js';
+import { clearDenominators } from './plucker-fraction-free.js';
+import { pluckerModular, pluckerResidues } from './plucker-modular.js';
+import { pluckerRational, pluckerRationalScaled, type ScaledRationalCoordinates } from './plucker-rational.js';
 import { walkColumnSets } from './plucker-walk.js';
 import { smallPrimeModulus } from './prime-field.js';
 import { QQ, type Rational } from './rational.js';
 import { binomial } from './subsets.js';
+
+export { scaledCoordinate, type ScaledRationalCoordinates } from './plucker-rational.js';
+export type { IntegerMinors } from './plucker-multimodular.js';
 
 function checkMatrix<T>(rows: readonly (readonly T[])[], n: number, what: string): void {
   if (!Number.isInteger(n) || n < 0) throw new RangeError(`${what}: dimension ${n} must be a nonnegative integer`);
@@ -98,6 +102,38 @@ export function pluckerCoordinates<T>(F: Field<T>, basisRows: readonly (readonly
     return pluckerModular(basisRows as unknown as readonly (readonly number[])[], n, p) as unknown as T[];
   }
   return pluckerOverField(F, basisRows, n);
+}
+
+/**
+ * The Plücker coordinates over GF(p), p < 2^31 (F one of the fields made by
+ * `primeField`), as residues in [0, p) in an Int32Array, in the order of
+ * `pluckerCoordinates`. The same numbers, without copying them into a plain
+ * array (at G(10,20) that copy costs about as much as computing them).
+ */
+export function pluckerResiduesModP(F: Field<number>, basisRows: readonly (readonly number[])[], n: number): Int32Array {
+  checkMatrix(basisRows, n, 'pluckerResiduesModP');
+  const p = smallPrimeModulus(F);
+  if (p === undefined) throw new RangeError(`pluckerResiduesModP: ${F.name} is not a prime field with modulus below 2^31`);
+  return pluckerResidues(basisRows, n, p);
+}
+
+/**
+ * The Plücker coordinates over QQ with one common denominator: coordinate r
+ * (in the order of `pluckerCoordinates`) is numerators[r] / denominator
+ * (`scaledCoordinate` in plucker-rational.ts gives it in lowest terms). For
+ * small entries the numerators are doubles holding safe integers, so no
+ * bigint or `Rational` object is made per coordinate.
+ */
+export function pluckerCoordinatesScaled(basisRows: readonly (readonly Rational[])[], n: number): ScaledRationalCoordinates {
+  checkMatrix(basisRows, n, 'pluckerCoordinatesScaled');
+  const k = basisRows.length;
+  if (k > n) return { numerators: [], denominator: 1n };
+  if (k === 0) return { numerators: [1n], denominator: 1n };
+  if (k === 1) {
+    const { integers, scale } = clearDenominators(basisRows);
+    return { numerators: integers[0]!, denominator: scale };
+  }
+  return pluckerRationalScaled(basisRows, n);
 }
 
 /** The Plücker coordinates as a sparse multivector of degree k: the wedge of the rows. */
