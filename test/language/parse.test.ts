@@ -403,3 +403,23 @@ describe('lexical details', () => {
     assert.equal(m.type === 'rows' && m.matrix.rows.length, 2);
   });
 });
+
+describe('the grammar and the token definitions themselves', () => {
+  // The shared parser and lexer skip the library's checks of the grammar to load quickly; these build them
+  // with the checks on, so that a change of the grammar that makes it ambiguous fails here.
+  test('the parser builds with the grammar checks on', async () => {
+    const { StatementParser } = await import('../../server/src/language/parser.js');
+    assert.doesNotThrow(() => new StatementParser({ statement: undefined, following: undefined }, { validate: true }));
+  });
+
+  test('the lexer builds with the token checks on and lexes like the shared one', async () => {
+    const { wedgeLexer } = await import('../../server/src/language/tokens.js');
+    const text = 'space V dim 3\nvector p = (1, 2, 3) # a comment\n';
+    const checked = wedgeLexer({ validate: true }).tokenize(text);
+    assert.deepEqual(checked.errors, []);
+    assert.deepEqual(
+      checked.tokens.map((t) => t.image),
+      wedgeLexer().tokenize(text).tokens.map((t) => t.image),
+    );
+  });
+});

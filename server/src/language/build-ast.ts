@@ -529,6 +529,40 @@ class StatementBuilder {
 }
 
 /**
+ * The deepest expression tree a statement may have, counted in nodes from the
+ * statement down. A chain `a + b + c + …` folds to the left, one level per
+ * operator, and name resolution, evaluation and the editor features all walk
+ * the tree recursively: fuzzing found a 5000-term sum reported as an internal
+ * error (the evaluator ran out of stack). Nesting in parentheses is bounded
+ * before parsing (parser.ts); this bounds long chains.
+ */
+export const MAX_EXPRESSION_DEPTH = 1000;
+
+/**
+ * The first expression node found deeper than MAX_EXPRESSION_DEPTH, if any.
+ * The walk uses its own stack, so it cannot overflow on the trees it rejects.
+ */
+function tooDeepExpression(statement: Statement): Expr | undefined {
+  const pending: [unknown, number][] = [[statement, 0]];
+  while (pending.length > 0) {
+    const [value, depth] = pending.pop()!;
+    if (typeof value !== 'object' || value === null) continue;
+    // Children are pushed last first, so the walk goes down the left operands first and reports,
+    // for a long chain, the part of it from its start to where it gets too deep.
+    const children = Array.isArray(value) ? value : Object.values(value);
+    // Statements and expressions are the nodes with a `type`; spans, names and entries are leaves.
+    const isNode = !Array.isArray(value) && typeof (value as { type?: unknown }).type === 'string';
+    const level = isNode ? depth + 1 : depth;
+    if (isNode && level > MAX_EXPRESSION_DEPTH) return value as Expr;
+    for (let i = children.length - 1; i >= 0; i--) {
+      const item: unknown = children[i];
+      if (typeof item === 'object' && item !== null) pending.push([item, level]);
+    }
+  }
+  return undefined;
+}
+
+/**
  * Builds one statement whose source range (keyword to last token) is `span`.
  * A missing part or a shape problem drops the statement; only a bug in the
  * builder itself can throw, and `parse.ts` contains that.
@@ -536,7 +570,21 @@ class StatementBuilder {
 export function buildStatement(cst: CstNode, span: Span): BuiltStatement {
   const builder = new StatementBuilder();
   try {
-    return { statement: builder.statement(cst, span), problems: builder.problems };
+    const statement = builder.statement(cst, span);
+    const deep = tooDeepExpression(statement);
+    if (deep !== undefined) {
+      // Dropped like a statement with a shape problem: every later pass would recurse through it.
+      builder.problems.push({
+        code: 'limit/nesting',
+        severity: 'error',
+        message:
+          `this expression nests more than ${MAX_EXPRESSION_DEPTH} operations deep (each operator of a long chain ` +
+          'such as a + b + c + … adds a level), which is past what can be evaluated; split it into several declarations',
+        span: deep.span,
+      });
+      return { statement: undefined, problems: builder.problems };
+    }
+    return { statement, problems: builder.problems };
   } catch (error) {
     if (error instanceof Incomplete || error instanceof Rejected) {
       return { statement: undefined, problems: builder.problems };

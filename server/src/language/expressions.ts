@@ -6,6 +6,7 @@
 import { DivisionByZeroError } from '../engine/field.js';
 import { findDependency, intersectRowSpaces, kernel, rref, sumRowSpaces } from '../engine/matrix.js';
 import {
+  type Multivector,
   add as addMV,
   fromTerms,
   isZeroMV,
@@ -16,7 +17,7 @@ import {
   toDense,
 } from '../engine/multivector.js';
 import { binomialBig } from '../engine/subsets.js';
-import { parseRational } from '../engine/rational.js';
+import { parseRational, type Rational } from '../engine/rational.js';
 import { chartCoordinates } from '../engine/chart.js';
 import type {
   Binary,
@@ -244,7 +245,7 @@ function divide(env: Environment, e: Binary, left: Value, right: Value): Value {
 function wedge(env: Environment, e: Binary, left: Value, right: Value): Value {
   // Between scalars `^` is a power with a whole exponent as written: a^2 + a + 1 in GF(4).
   if (left.t === 'scalar' && e.right.type === 'number' && /^\d+$/.test(e.right.text)) {
-    return { t: 'scalar', value: power(env, left.value, BigInt(e.right.text)) };
+    return { t: 'scalar', value: power(env, left.value, BigInt(e.right.text), e.span) };
   }
   const a = asMultivector(env, left);
   const b = asMultivector(env, right);
@@ -253,7 +254,43 @@ function wedge(env: Environment, e: Binary, left: Value, right: Value): Value {
     fail('type/operand', e.opSpan, `cannot wedge ${describeValue(left)} with ${describeValue(right)}${scalarHint}`);
   }
   sameSpace(a.space, b.space, e.opSpan, 'cannot wedge elements of different spaces');
+  checkWedgeSize(env, a.mv, b.mv, e.span);
   return { t: 'multivector', space: a.space, mv: wedgeMV(env.F, a.mv, b.mv) };
+}
+
+/**
+ * Guards a wedge product against a result past the coordinate limit and
+ * against a runaway amount of work. The product of a and b multiplies every
+ * term of a with every term of b, so it costs |a|·|b| steps and has at most
+ * min(|a|·|b|, C(n, p+q)) terms. Fuzzing found chains of wedges of generic
+ * vectors, short to write, whose products grow like C(n, k): fifteen vectors in
+ * dimension 30 ran for 38 s, and 32 in dimension 64 would never have ended.
+ * Such a product is refused, like a Plücker vector of more than the limit of
+ * coordinates, once it could have more terms than that limit. The work bound
+ * lets every product of a multivector within the limit with one vector pass.
+ */
+function checkWedgeSize(env: Environment, a: Multivector<Scalar>, b: Multivector<Scalar>, span: Span): void {
+  const pairs = a.terms.size * b.terms.size;
+  const { maxCoordinates, maxDimension } = env.limits;
+  if (pairs <= maxCoordinates) return;
+  const degree = a.k + b.k;
+  // A degree above the dimension gives zero, with no term to compute, but still every pair to look at.
+  const size = degree > a.n ? 0n : binomialBig(a.n, degree);
+  const bound = size < BigInt(pairs) ? size : BigInt(pairs);
+  if (bound > BigInt(maxCoordinates)) {
+    fail(
+      'limit/too-many-coordinates',
+      span,
+      `this wedge product could have up to ${bound} terms (C(${a.n},${degree}) = ${size} in degree ${degree}), more than the limit of ${maxCoordinates} coordinates`,
+    );
+  }
+  if (pairs > maxCoordinates * maxDimension) {
+    fail(
+      'limit/too-many-coordinates',
+      span,
+      `this wedge product would multiply ${a.terms.size} terms by ${b.terms.size} terms, ${pairs} products in all, more than the ${maxCoordinates * maxDimension} allowed (the limit of ${maxCoordinates} coordinates times the largest dimension, ${maxDimension})`,
+    );
+  }
 }
 
 function intersect(env: Environment, e: Binary, left: Value, right: Value): Value {
@@ -264,7 +301,35 @@ function intersect(env: Environment, e: Binary, left: Value, right: Value): Valu
   return subspaceOf(env, left.space, intersectRowSpaces(env.F, left.basis, right.basis, left.space.dim));
 }
 
-function power(env: Environment, base: Scalar, exponent: bigint): Scalar {
+/**
+ * The most bits a power over the rationals may have, about 301 000 decimal
+ * digits. Repeated squaring makes a^e quick to ask for and exponentially
+ * large in the text: fuzzing found `3^10000000` (4.8 million digits) taking
+ * 13 s to show, and `((7^1000)^1000)^1000` would never have finished. Finite
+ * fields are not concerned: their elements have a fixed size.
+ */
+export const MAX_POWER_BITS = 1_000_000;
+
+/** log2 |x| to double precision (0 for x = 0), from the leading 53 bits. */
+function log2Magnitude(x: bigint): number {
+  const magnitude = x < 0n ? -x : x;
+  if (magnitude === 0n) return 0;
+  const bits = magnitude.toString(16).length * 4;
+  const shift = Math.max(0, bits - 64);
+  return shift + Math.log2(Number(magnitude >> BigInt(shift)));
+}
+
+function power(env: Environment, base: Scalar, exponent: bigint, span: Span): Scalar {
+  if (env.F.characteristic === 0n) {
+    // Over the rationals the result has about exponent · log2 max(|num|, den) bits (0 for 0, 1 and −1).
+    const { num, den } = base as Rational;
+    const bitsPerFactor = Math.max(log2Magnitude(num), log2Magnitude(den));
+    const bits = bitsPerFactor * Number(exponent);
+    if (bitsPerFactor > 0 && bits > MAX_POWER_BITS) {
+      const size = Number.isFinite(bits) ? `about ${Math.ceil(bits * Math.log10(2))} decimal digits` : 'more digits than can be counted';
+      fail('limit/number-size', span, `this power would have ${size}, more than the ${MAX_POWER_BITS} bits (about 301 000 digits) a power is computed to`);
+    }
+  }
   let result = env.F.one;
   let b = base;
   for (let e = exponent; e > 0n; e >>= 1n) {

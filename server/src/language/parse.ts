@@ -38,6 +38,8 @@ const ERROR_CODES: Record<string, string> = {
   NoViableAltException: 'syntax/unexpected-token',
   EarlyExitException: 'syntax/unexpected-token',
   NotAllInputParsedException: 'syntax/expected-statement',
+  // A statement nested past what the parser can descend (./parser.ts, MAX_NESTING).
+  NestingLimitException: 'limit/nesting',
 };
 
 const KIND_BY_KEYWORD: Record<string, DroppedStatement['kind']> = {
@@ -173,8 +175,8 @@ class ProgramReader {
 
   /** One statement's tokens, from its keyword up to (not including) `following`. */
   private statementPiece(piece: IToken[], following: IToken | undefined): void {
-    const cst = statementParser.parseStatement(piece, following);
-    const errors = statementParser.errors;
+    const cst = statementParser().parseStatement(piece, following);
+    const errors = statementParser().errors;
     if (errors.length === 0 && cst) {
       this.keepOrDrop(piece, cst, piece[piece.length - 1]!);
       return;
@@ -267,7 +269,7 @@ class ProgramReader {
 }
 
 function readProgram(text: string, memo: PieceMemo | undefined): ParseResult {
-  const lexed = T.wedgeLexer.tokenize(text);
+  const lexed = T.wedgeLexer().tokenize(text);
   const problems: Problem[] = [];
   for (const error of lexed.errors) {
     const start = Math.max(0, Math.min(error.offset, text.length));

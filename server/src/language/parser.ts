@@ -12,7 +12,7 @@
  * The tree is turned into the AST of `./ast.ts` by `./build-ast.ts`; the
  * labels used here (`LABEL`) are the names that builder reads.
  */
-import { CstParser, type CstNode, type IToken } from 'chevrotain';
+import { CstParser, type CstNode, type IRecognitionException, type IToken, type TokenType } from 'chevrotain';
 import {
   ALL_TOKENS, Arrow, Basis, Claim, Columns, Convention, Flag, Is, MapKeyword, Colon, Comma, Decomposable, Dim, Dot, ElementOf, Equals, Field, Identifier,
   In, Intersect, LBrace, LBracket, LParen, Minus, Multivector, Normalize, Not, NotElementOf, NotEquals,
@@ -21,15 +21,81 @@ import {
 } from './tokens.js';
 import { createErrorMessageProvider, type MessageContext } from './syntax-messages.js';
 
+/**
+ * The deepest nesting of parentheses and prefix operators (`-`, `+`, `dim`)
+ * a statement may have. The parser descends about seven rules per
+ * parenthesis, so a few hundred levels overflow the call stack: fuzzing found
+ * 250 nested parentheses reported as an internal error, and, when the
+ * overflow hit while the parser was cleaning up, a problem whose span ended
+ * at NaN. No statement written by hand comes near the bound; a deeper one is
+ * refused with a problem at the token that goes past it.
+ */
+export const MAX_NESTING = 100;
+
+/** The name of the error `parseStatement` reports for a statement nested past MAX_NESTING. */
+export const NESTING_LIMIT_ERROR = 'NestingLimitException';
+
+const OPERAND_ENDS: readonly TokenType[] = [NumberLiteral, Identifier, RParen, RBracket, RBrace];
+
+/**
+ * The first token at which the statement nests deeper than MAX_NESTING, if
+ * any. An open parenthesis nests one level below the prefix operators written
+ * directly before it (`-(`, `dim (`); a run of prefix operators (`- - x`,
+ * `dim dim V`) nests one level per operator. A sign after an operand is a
+ * binary operator and nests nothing.
+ */
+export function tooDeeplyNested(tokens: readonly IToken[]): IToken | undefined {
+  const outer: number[] = [];
+  let depth = 0;
+  let prefixes = 0;
+  let previous: IToken | undefined;
+  for (const token of tokens) {
+    const type = token.tokenType;
+    if (type === LParen) {
+      outer.push(depth);
+      depth += prefixes + 1;
+      prefixes = 0;
+    } else if (type === RParen) {
+      depth = outer.pop() ?? 0;
+      prefixes = 0;
+    } else if (type === Dim || ((type === Minus || type === Plus) && !(previous && OPERAND_ENDS.includes(previous.tokenType)))) {
+      prefixes++;
+    } else {
+      prefixes = 0;
+    }
+    if (depth + prefixes > MAX_NESTING) return token;
+    previous = token;
+  }
+  return undefined;
+}
+
+function nestingError(token: IToken): IRecognitionException {
+  const error = new Error(
+    `this statement nests parentheses and signs more than ${MAX_NESTING} levels deep, which is past what can be read; ` +
+      'split it into several declarations',
+  ) as IRecognitionException;
+  error.name = NESTING_LIMIT_ERROR;
+  error.token = token;
+  error.resyncedTokens = [];
+  error.context = { ruleStack: [], ruleOccurrenceStack: [] };
+  return error;
+}
+
 export class StatementParser extends CstParser {
   /** What the error messages need to know about the piece being parsed; set by `parseStatement`. */
   readonly context: MessageContext;
 
-  constructor(context: MessageContext) {
+  /**
+   * `validate` checks the grammar itself (ambiguities, left recursion) while building the parser. It costs
+   * about as much as the rest of the construction and can only fail on a change of the grammar, so the
+   * shared parser skips it and a test builds one with it (test/language/parse.test.ts).
+   */
+  constructor(context: MessageContext, options: { validate?: boolean } = {}) {
     super(ALL_TOKENS, {
       recoveryEnabled: false,
       errorMessageProvider: createErrorMessageProvider(context),
       maxLookahead: 2,
+      skipValidations: !options.validate,
     });
     this.context = context;
     this.performSelfAnalysis();
@@ -441,11 +507,28 @@ export class StatementParser extends CstParser {
   parseStatement(tokens: IToken[], following: IToken | undefined): CstNode | undefined {
     this.context.statement = tokens[0];
     this.context.following = following;
-    this.input = tokens;
+    // Chevrotain pads its input array with end-of-file tokens while it parses and removes them when
+    // it is done; should that clean-up ever fail, only this copy keeps the padding, never the caller's
+    // tokens (whose last one would otherwise be an end-of-file token with NaN offsets).
+    this.input = tokens.slice();
+    const deep = tooDeeplyNested(tokens);
+    if (deep !== undefined) {
+      // Refused before the recursive descent that would overflow the stack; parse.ts reports it like a syntax error.
+      this.errors = [nestingError(deep)];
+      return undefined;
+    }
     const cst = this.statement() as CstNode | undefined;
     return cst ?? undefined;
   }
 }
 
 /** The one reusable parser instance (Chevrotain parsers are expensive to build and cheap to reuse). */
-export const statementParser = new StatementParser({ statement: undefined, following: undefined });
+let shared: StatementParser | undefined;
+
+/**
+ * The shared parser, built on first use: building it is the largest part of loading the language layer,
+ * and the server answers `initialize` before it needs a parser.
+ */
+export function statementParser(): StatementParser {
+  return (shared ??= new StatementParser({ statement: undefined, following: undefined }));
+}

@@ -134,10 +134,17 @@ export const ALL_TOKENS: TokenType[] = [
   LParen, RParen, LBracket, RBracket, LBrace, RBrace, Comma, Semicolon, Colon, Dot,
 ];
 
-export const wedgeLexer = new Lexer(ALL_TOKENS, {
-  positionTracking: 'full',
-  ensureOptimizations: true,
-});
+let lexer: Lexer | undefined;
+
+/**
+ * The lexer, built on first use (like the parser, ./parser.ts, so that loading the language layer stays
+ * cheap). `validate` checks the token definitions while building; the shared lexer skips that, and a test
+ * builds one with it.
+ */
+export function wedgeLexer(options: { validate?: boolean } = {}): Lexer {
+  if (options.validate) return new Lexer(ALL_TOKENS, { positionTracking: 'full', ensureOptimizations: true });
+  return (lexer ??= new Lexer(ALL_TOKENS, { positionTracking: 'full', ensureOptimizations: true, skipValidations: true }));
+}
 
 export function isStatementKeyword(token: IToken): boolean {
   return token.tokenType === StatementKeyword || (token.tokenType.CATEGORIES ?? []).includes(StatementKeyword);

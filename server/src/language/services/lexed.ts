@@ -18,7 +18,7 @@ export interface Lexed {
 }
 
 export function lex(text: string): Lexed {
-  const lexed = T.wedgeLexer.tokenize(text);
+  const lexed = T.wedgeLexer().tokenize(text);
   // No token can contain `#` (the language has no strings), so every `#` starts a comment.
   const comments: Span[] = [];
   for (const match of text.matchAll(/#[^\r\n]*/g)) {
