@@ -5,7 +5,8 @@
  *
  * Stages, each in its own process (each stops every process it started, whatever happens):
  *   neovim           the language server under a second LSP client (test/e2e/neovim.e2e.ts)
- *   workbench        the packaged extension in the VS Code workbench (test/e2e/workbench.e2e.ts)
+ *   workbench        the packaged extension in the VS Code workbench (test/e2e/workbench.e2e.ts; editing:
+ *                    workbench-editing.e2e.ts; hovers during a heavy evaluation: workbench-hover-timing.e2e.ts)
  *   restricted-mode  the same in Restricted Mode (test/e2e/restricted-mode.e2e.ts)
  *   in-host          the in-host suite through @vscode/test-electron's runTests (scripts/e2e/run-in-host.ts)
  *
@@ -22,11 +23,12 @@ import { ensureTools } from './tools.js';
 import { GROUP_FILE_VARIABLE, killNotedGroups } from './processes.js';
 
 const TSX = join(ROOT, 'node_modules/tsx/dist/loader.mjs');
-const nodeTest = (file: string) => [process.execPath, '--import', TSX, '--test', '--test-reporter=spec', file];
+// One file at a time: each starts its own editor, and the timing check must not share the processors.
+const nodeTest = (...files: string[]) => [process.execPath, '--import', TSX, '--test', '--test-concurrency=1', '--test-reporter=spec', ...files];
 
 const STAGES: Record<string, string[]> = {
   neovim: nodeTest('test/e2e/neovim.e2e.ts'),
-  workbench: nodeTest('test/e2e/workbench.e2e.ts'),
+  workbench: nodeTest('test/e2e/workbench.e2e.ts', 'test/e2e/workbench-editing.e2e.ts', 'test/e2e/workbench-hover-timing.e2e.ts'),
   'restricted-mode': nodeTest('test/e2e/restricted-mode.e2e.ts'),
   'in-host': [process.execPath, '--import', TSX, 'scripts/e2e/run-in-host.ts'],
 };

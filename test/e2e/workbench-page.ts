@@ -29,7 +29,45 @@ export const SELECTORS = {
   hover: '.monaco-hover:not(.hidden) .hover-contents',
   statusBar: '.part.statusbar',
   quickInput: '.quick-input-widget:not([style*="display: none"]) .quick-input-box input',
+  /** The window progress in the status bar (where the language client shows work-done progress). */
+  progress: '#status\\.progress',
+  suggestWidget: `${EDITOR} .suggest-widget.visible`,
+  suggestRow: `${EDITOR} .suggest-widget.visible .monaco-list-row`,
+  renameInput: `${EDITOR} .rename-box .rename-input`,
+  /** The message the editor shows at the cursor, e.g. why a rename is refused. */
+  editorMessage: `${EDITOR} .monaco-editor-overlaymessage`,
+  quickFixRow: '.action-widget .monaco-list-row.action',
+  lightBulb: `${EDITOR} .lightBulbWidget`,
+  paneHeader: '.pane-header',
+  /** The Explorer's section that lists the workspace folder. */
+  folderSectionHeader: '.pane-header[aria-label^="Explorer Section"]',
 } as const;
+
+/** The Explorer section of the extension's results view, by its title (package.json contributes.views). */
+export const RESULTS_VIEW_TITLE = 'Wedgework Results';
+
+/** One entry of the suggestion widget: its label and the detail beside it. */
+export interface Suggestion {
+  label: string;
+  detail: string;
+  focused: boolean;
+}
+
+/** One entry of the results view: the label and the dimmed description beside it. */
+export interface ResultEntry {
+  label: string;
+  description: string;
+}
+
+/**
+ * How long a hover took, in milliseconds, measured inside the page from the mouse event that
+ * arrived on the word: until the hover's element showed the expected content, and until the next
+ * animation frame after that (when the browser paints it).
+ */
+export interface HoverTiming {
+  contentMs: number;
+  paintedMs: number;
+}
 
 /** Text as the page shows it: Monaco writes spaces as no-break spaces. */
 const normalize = (text: string) => text.replace(/\u00a0/g, ' ').trim();
@@ -73,6 +111,49 @@ const LENS_CENTRE_SOURCE = `(({ selector, strings }) => {
   if (box.width === 0 || box.height === 0) return null;
   return { x: box.left + Math.min(box.width / 2, 40), y: box.top + box.height / 2 };
 })`;
+
+/**
+ * Browser-side code that arms a one-shot measurement of a hover: it notes the time of the mouse
+ * event at (x, y), then the time at which an element matching `selector` is displayed with text
+ * matching every pattern, then the next animation frame. The result is read from
+ * `window.__wedgeworkHoverProbe`.
+ */
+const HOVER_PROBE_SOURCE = `(({ selector, x, y, patterns }) => {
+  const norm = (s) => s.replace(/\\u00a0/g, ' ');
+  const regexes = patterns.map((p) => new RegExp(p));
+  const probe = { movedAt: undefined, contentAt: undefined, paintedAt: undefined, lastText: '' };
+  window.__wedgeworkHoverProbe = probe;
+  const onMove = (event) => {
+    if (Math.abs(event.clientX - x) <= 1.5 && Math.abs(event.clientY - y) <= 1.5) {
+      probe.movedAt = performance.now();
+      document.removeEventListener('mousemove', onMove, true);
+    }
+  };
+  document.addEventListener('mousemove', onMove, true);
+  const observer = new MutationObserver(() => {
+    if (probe.movedAt === undefined || probe.contentAt !== undefined) return;
+    const hover = document.querySelector(selector);
+    if (!hover || hover.getClientRects().length === 0) return;
+    probe.lastText = norm(hover.textContent);
+    if (!regexes.every((r) => r.test(probe.lastText))) return;
+    probe.contentAt = performance.now();
+    observer.disconnect();
+    requestAnimationFrame(() => { probe.paintedAt = performance.now(); });
+  });
+  observer.observe(document.body, { subtree: true, childList: true, characterData: true, attributes: true });
+})`;
+
+/** Browser-side code for the entries of the suggestion widget. */
+const SUGGESTIONS_SOURCE = `(({ selector }) => [...document.querySelectorAll(selector)].map((row) => ({
+  label: (row.querySelector('.label-name')?.textContent ?? '').replace(/\\u00a0/g, ' '),
+  detail: (row.querySelector('.details-label')?.textContent ?? '').replace(/\\u00a0/g, ' '),
+  focused: row.classList.contains('focused'),
+})))`;
+
+/** The header of the Explorer section titled `title` (a Playwright selector: `:text-is` is exact). */
+const sectionHeader = (title: string) => `${SELECTORS.paneHeader}:has(h3.title:text-is("${title}"))`;
+
+const escapeRegExp = (text: string) => text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
 
 export class Workbench {
   private shots = 0;
@@ -155,6 +236,15 @@ export class Workbench {
     }
   }
 
+  /** Waits until no element matching `selector` is visible (hidden or removed). */
+  async waitForHidden(what: string, selector: string, timeout = DEFAULT_WAIT_MS): Promise<void> {
+    try {
+      await this.page.locator(selector).first().waitFor({ state: 'hidden', timeout });
+    } catch {
+      await this.fail(`${what}: ${selector} still visible after ${timeout / 1000} s`, `page title: ${await this.page.title()}`);
+    }
+  }
+
   /** Waits until the browser-side `expression` is true; on timeout, `describe()` says what the page showed. */
   async waitForCondition(what: string, expression: string, describe: () => Promise<string>, timeout = DEFAULT_WAIT_MS): Promise<void> {
     try {
@@ -171,16 +261,21 @@ export class Workbench {
     await this.waitForVisible('the explorer lists the workspace folder', SELECTORS.explorerRow, 60_000);
   }
 
-  /** Clicks the file in the explorer and waits until its editor shows it in the Wedgework language. */
-  async openFile(name: string, firstLine: string): Promise<void> {
+  /**
+   * Clicks the file in the explorer and waits until its editor shows it in the Wedgework language.
+   * The first file of a session may take longer (`timeout`): the workbench is still starting.
+   */
+  async openFile(name: string, firstLine: string, timeout = DEFAULT_WAIT_MS): Promise<void> {
+    // The results view's check collapses the folder's section to make room; a user opens it again.
+    await this.setSectionExpanded(SELECTORS.folderSectionHeader, true);
     const row = this.page.locator(`${SELECTORS.explorerRow}[aria-label*="${name}"]`).first();
     try {
       await row.click({ timeout: DEFAULT_WAIT_MS });
     } catch {
       await this.fail(`opening ${name}`, `no explorer row for ${name}; rows: ${(await this.texts(SELECTORS.explorerRow)).join(' | ')}`);
     }
-    await this.waitForText(`the editor shows ${name}`, SELECTORS.viewLine, [firstLine]);
-    await this.waitForText(`the status bar names the language of ${name}`, SELECTORS.languageMode, ['Wedgework']);
+    await this.waitForText(`the editor shows ${name}`, SELECTORS.viewLine, [firstLine], timeout);
+    await this.waitForText(`the status bar names the language of ${name}`, SELECTORS.languageMode, ['Wedgework'], timeout);
   }
 
   /** Moves the cursor to the start of a one-based line with Go to Line (Ctrl+G). */
@@ -190,6 +285,16 @@ export class Workbench {
     await this.page.keyboard.type(String(line));
     await this.page.keyboard.press('Enter');
     await this.waitForText(`the cursor moves to line ${line}`, SELECTORS.cursorPosition, [`Ln ${line}, Col 1`]);
+    await this.waitForEditorFocus(`the editor after going to line ${line}`);
+  }
+
+  /** Waits until the keyboard types into the editor (the closing Go to Line box, for one, returns the focus late). */
+  async waitForEditorFocus(what: string): Promise<void> {
+    await this.waitForCondition(
+      `${what} has the keyboard focus`,
+      `!!document.activeElement?.closest(${JSON.stringify(SELECTORS.editor)})`,
+      async () => `the focus is on ${await this.page.evaluate('document.activeElement?.outerHTML.slice(0, 200)')}`,
+    );
   }
 
   /**
@@ -255,6 +360,222 @@ export class Workbench {
   /** What the page's clipboard holds (the browser context was granted clipboard-read). */
   async readClipboard(): Promise<string> {
     return (await this.page.evaluate('navigator.clipboard.readText()')) as string;
+  }
+
+  /** The centre of `word` on the editor line showing `lineText`, or a failure naming the line. */
+  private async wordCentre(lineText: string, word: string): Promise<{ x: number; y: number }> {
+    const centre = (await this.page.evaluate(
+      `${WORD_CENTRE_SOURCE}(${JSON.stringify({ selector: SELECTORS.viewLine, lineText, word })})`,
+    )) as { x: number; y: number } | null;
+    return centre ?? this.fail(`finding ${word}`, `no editor line shows ${JSON.stringify(lineText)}`);
+  }
+
+  /** Puts the cursor in `word` on the line showing `lineText` by clicking it. */
+  async clickWord(lineText: string, word: string): Promise<void> {
+    const centre = await this.wordCentre(lineText, word);
+    await this.page.mouse.click(centre.x, centre.y);
+  }
+
+  /** Waits until some editor line shows `lineText` (for example after an edit). */
+  async waitForLine(what: string, lineText: string, timeout = DEFAULT_WAIT_MS): Promise<void> {
+    await this.waitForText(what, SELECTORS.viewLine, [lineText], timeout);
+  }
+
+  /** The entries the suggestion widget shows now (none when it is closed). */
+  async suggestions(): Promise<Suggestion[]> {
+    return (await this.page.evaluate(`${SUGGESTIONS_SOURCE}(${JSON.stringify({ selector: SELECTORS.suggestRow })})`)) as Suggestion[];
+  }
+
+  /**
+   * Waits until the suggestion widget lists every expected entry, each with a detail that contains
+   * the expected detail; returns what it lists then.
+   */
+  async waitForSuggestions(what: string, expected: readonly { label: string; detail: string }[], timeout = DEFAULT_WAIT_MS): Promise<Suggestion[]> {
+    const deadline = Date.now() + timeout;
+    const missing = (shown: Suggestion[]) =>
+      expected.filter((e) => !shown.some((s) => s.label === e.label && s.detail.includes(e.detail)));
+    let shown: Suggestion[] = [];
+    for (;;) {
+      shown = await this.suggestions();
+      if (missing(shown).length === 0) return shown;
+      if (Date.now() > deadline) break;
+      await this.page.waitForTimeout(POLL_MS);
+    }
+    return this.fail(
+      `${what}: the suggestion widget did not list what was expected within ${timeout / 1000} s`,
+      [
+        `missing: ${missing(shown).map((e) => `${e.label} (${e.detail})`).join(', ')}`,
+        shown.length === 0 ? 'the widget was closed or empty' : `it listed: ${shown.map((s) => `${s.label} (${s.detail})`).join(', ')}`,
+      ].join('\n'),
+    );
+  }
+
+  /** Moves the widget's focus to the entry `label` with the arrow keys, accepts it with Enter and waits for the widget to close. */
+  async acceptSuggestion(label: string): Promise<void> {
+    const shown = await this.waitForSuggestions(`the suggestion ${label}`, [{ label, detail: '' }]);
+    for (let step = 0; step <= shown.length; step++) {
+      if ((await this.suggestions()).find((s) => s.focused)?.label === label) {
+        await this.page.keyboard.press('Enter');
+        await this.waitForHidden(`the suggestion widget after accepting ${label}`, SELECTORS.suggestWidget);
+        return;
+      }
+      await this.page.keyboard.press('ArrowDown');
+    }
+    await this.fail(`accepting the suggestion ${label}`, `the focus never reached it; entries: ${shown.map((s) => s.label).join(', ')}`);
+  }
+
+  /** Renames `word` on the line showing `lineText` with F2, typing `newName` and Enter. */
+  async rename(lineText: string, word: string, newName: string): Promise<void> {
+    await this.clickWord(lineText, word);
+    await this.page.keyboard.press('F2');
+    await this.waitForVisible(`the rename box for ${word}`, SELECTORS.renameInput);
+    // The box shows before it takes the keyboard: typing waits for the focus.
+    await this.waitForCondition(
+      `the rename box proposes ${word} and has the keyboard focus`,
+      `(() => { const box = document.querySelector(${JSON.stringify(SELECTORS.renameInput)}); return !!box && box.value === ${JSON.stringify(word)} && document.activeElement === box; })()`,
+      async () => `the box holds ${JSON.stringify(await this.page.locator(SELECTORS.renameInput).inputValue())}; the focus is on ${await this.page.evaluate('document.activeElement?.outerHTML.slice(0, 200)')}`,
+    );
+    // The proposed name is selected: typing replaces it.
+    await this.page.keyboard.type(newName);
+    await this.page.keyboard.press('Enter');
+    await this.waitForHidden(`the rename box after renaming ${word}`, SELECTORS.renameInput);
+  }
+
+  /**
+   * Presses F2 on `word` where a rename must be refused, and returns the message the editor shows
+   * there; fails if a rename box opens instead.
+   */
+  async renameRefusal(lineText: string, word: string): Promise<string> {
+    await this.clickWord(lineText, word);
+    await this.page.keyboard.press('F2');
+    const message = await this.waitForText(`the reason why ${word} cannot be renamed`, SELECTORS.editorMessage, [`'${word}'`]);
+    if (await this.page.locator(SELECTORS.renameInput).isVisible()) {
+      await this.fail(`renaming ${word}`, 'a rename box opened, although a message refused the rename');
+    }
+    return message;
+  }
+
+  /**
+   * Opens the quick-fix menu at the cursor (Ctrl+.), clicks the action whose title shows
+   * `expected` and waits for the menu to close; returns the titles the menu offered.
+   */
+  async applyQuickFix(expected: Expected): Promise<string[]> {
+    // The light bulb says that the editor knows the actions at the cursor.
+    await this.waitForVisible('the light bulb at the cursor', SELECTORS.lightBulb);
+    await this.waitForEditorFocus('the editor before Ctrl+.');
+    await this.page.keyboard.press('Control+.');
+    const title = await this.waitForText('the quick fix in the menu', SELECTORS.quickFixRow, expected);
+    const offered = await this.texts(SELECTORS.quickFixRow);
+    await this.page.locator(SELECTORS.quickFixRow).filter({ hasText: title }).first().click();
+    await this.waitForHidden('the quick-fix menu after applying the fix', SELECTORS.quickFixRow);
+    return offered;
+  }
+
+  /** Expands or collapses the Explorer section whose header matches `header`, if it is not so already. */
+  private async setSectionExpanded(header: string, expanded: boolean): Promise<void> {
+    const locator = this.page.locator(header).first();
+    if ((await locator.count()) === 0) return;
+    const want = String(expanded);
+    if ((await locator.getAttribute('aria-expanded')) === want) return;
+    await locator.click();
+    const deadline = Date.now() + DEFAULT_WAIT_MS;
+    while ((await locator.getAttribute('aria-expanded')) !== want) {
+      if (Date.now() > deadline) await this.fail(`the section ${header}`, `it did not become ${expanded ? 'expanded' : 'collapsed'}`);
+      await this.page.waitForTimeout(POLL_MS);
+    }
+  }
+
+  /**
+   * Shows the results view: collapses the folder's section, which otherwise leaves the view too
+   * little room for its entries, and expands the view's section.
+   */
+  async showResultsView(): Promise<void> {
+    await this.setSectionExpanded(SELECTORS.folderSectionHeader, false);
+    await this.setSectionExpanded(sectionHeader(RESULTS_VIEW_TITLE), true);
+  }
+
+  /** The results view's section: its header and body. */
+  private resultsPane() {
+    return this.page.locator('.pane').filter({ has: this.page.locator(sectionHeader(RESULTS_VIEW_TITLE)) });
+  }
+
+  /** What the results view's header shows beside its title (the file it describes). */
+  async resultsViewDescription(): Promise<string> {
+    return normalize((await this.resultsPane().locator('.pane-header .description').first().textContent()) ?? '');
+  }
+
+  /** The entries the results view shows now. */
+  async resultEntries(): Promise<ResultEntry[]> {
+    const rows = this.resultsPane().locator('.monaco-list-row');
+    const entries: ResultEntry[] = [];
+    for (const row of await rows.all()) {
+      entries.push({
+        label: normalize((await row.locator('.label-name').first().textContent()) ?? ''),
+        description: normalize((await row.locator('.label-description').first().textContent().catch(() => '')) ?? ''),
+      });
+    }
+    return entries;
+  }
+
+  /** Waits until the results view shows an entry `label` whose description shows `expected`; returns that entry. */
+  async waitForResult(what: string, label: string, expected: Expected, timeout = DEFAULT_WAIT_MS): Promise<ResultEntry> {
+    const deadline = Date.now() + timeout;
+    let entries: ResultEntry[] = [];
+    for (;;) {
+      entries = await this.resultEntries();
+      const match = entries.find((e) => e.label === label && missingFrom(e.description, expected).length === 0);
+      if (match) return match;
+      if (Date.now() > deadline) break;
+      await this.page.waitForTimeout(POLL_MS);
+    }
+    return this.fail(
+      `${what}: the results view showed no entry ${label} with ${describeExpected(expected)} within ${timeout / 1000} s`,
+      entries.length === 0 ? 'the view showed no entries' : ['it showed:', ...entries.map((e) => `  | ${e.label} — ${e.description.slice(0, 300)}`)].join('\n'),
+    );
+  }
+
+  /** Clicks the results view's entry `label` whose description shows `expected`. */
+  async clickResult(label: string, expected: Expected): Promise<void> {
+    await this.waitForResult(`the entry ${label} to click`, label, expected);
+    const strings = expected.filter((e): e is string => typeof e === 'string');
+    let row = this.resultsPane().locator('.monaco-list-row').filter({ has: this.page.locator('.label-name', { hasText: new RegExp(`^${escapeRegExp(label)}$`) }) });
+    for (const s of strings) row = row.filter({ hasText: s });
+    await row.first().click();
+  }
+
+  /**
+   * Moves the mouse onto `word` on the line showing `lineText`, from a place where no hover shows,
+   * and measures how long the hover takes to show every pattern (see HoverTiming). Fails when no
+   * such hover shows within `timeout`.
+   */
+  async measureHover(lineText: string, word: string, patterns: readonly RegExp[], timeout = DEFAULT_WAIT_MS): Promise<HoverTiming> {
+    const target = await this.wordCentre(lineText, word);
+    const x = Math.round(target.x);
+    const y = Math.round(target.y);
+    // Away: the empty part of the editor at the right of the same line, where no hover shows.
+    const editor = await this.page.locator(SELECTORS.editor).first().boundingBox();
+    if (!editor) return this.fail('measuring a hover', 'the editor is not shown');
+    await this.page.mouse.move(editor.x + editor.width - 80, y, { steps: 1 });
+    await this.waitForCondition(
+      'no hover before the measurement',
+      `(() => { const h = document.querySelector(${JSON.stringify(SELECTORS.hover)}); return !h || h.getClientRects().length === 0; })()`,
+      async () => `a hover still shows: ${(await this.texts(SELECTORS.hover)).join(' | ').slice(0, 400)}`,
+    );
+    await this.page.evaluate(
+      `${HOVER_PROBE_SOURCE}(${JSON.stringify({ selector: SELECTORS.hover, x, y, patterns: patterns.map((p) => p.source) })})`,
+    );
+    await this.page.mouse.move(x, y, { steps: 1 });
+    try {
+      await this.page.waitForFunction('window.__wedgeworkHoverProbe.paintedAt !== undefined', undefined, { timeout, polling: 'raf' });
+    } catch {
+      const probe = (await this.page.evaluate('window.__wedgeworkHoverProbe')) as { movedAt?: number; lastText: string };
+      return this.fail(
+        `the hover over ${word}: no hover showed ${patterns.map(String).join(', ')} within ${timeout / 1000} s`,
+        probe.movedAt === undefined ? 'the page saw no mouse event on the word' : `the last hover text seen: ${JSON.stringify(probe.lastText.slice(0, 400))}`,
+      );
+    }
+    const probe = (await this.page.evaluate('window.__wedgeworkHoverProbe')) as { movedAt: number; contentAt: number; paintedAt: number };
+    return { contentMs: probe.contentAt - probe.movedAt, paintedMs: probe.paintedAt - probe.movedAt };
   }
 
   /** Opens the Problems panel (Ctrl+Shift+M) unless it is open. */

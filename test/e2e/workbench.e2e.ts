@@ -42,7 +42,7 @@ describe('the extension in the VS Code workbench', { timeout: 240_000 }, () => {
     page = browser.pages()[0] ?? (await browser.newPage());
     bench = new Workbench(page, artifacts);
     await timed('load the workbench', () => bench.open(server!.url(workspace)));
-    await timed('open the sample', () => bench.openFile(facts.SAMPLE_FILE, 'Sight lines of a two-camera calibration rig'));
+    await timed('open the sample', () => bench.openFile(facts.SAMPLE_FILE, 'Sight lines of a two-camera calibration rig', FIRST_RESULT_WAIT_MS));
   });
 
   after(async () => {
