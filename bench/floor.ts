@@ -5,7 +5,7 @@
  * time of the walk above this is what its bookkeeping costs.
  */
 // The kernels the walks use (branch-free last step), so that the floor does the same operations.
-import { dot3Mod, dot4Mod, dotMod, mulAddMod, mulMod } from '../server/src/engine/plucker-modular-kernels.js';
+import { dot3Mod, dot4Mod, dotMod, mulAddMod, mulMod } from '../server/src/engine/modular-arithmetic.js';
 import type { ModularWalkCounts } from '../server/src/engine/plucker-modular.js';
 import type { FractionFreeCounts } from '../server/src/engine/plucker-fraction-free.js';
 import { Random } from './random.js';

@@ -5,9 +5,8 @@
  * plucker.ts (see there for why it is correct and what it costs), specialised
  * so that no step goes through the `Field` interface: each level of the walk
  * keeps its remaining rows in one Int32Array, and every entry update is one
- * exact multiply-add of plucker-modular-kernels.ts (the kernels of
- * modular-arithmetic.ts with a branch-free last step, which on random
- * residues made the whole walk about three times faster).
+ * exact multiply-add of modular-arithmetic.ts (whose branch-free last step
+ * made the whole walk about three times faster on random residues).
  *
  * Three things differ from the generic walk, all to save work near the leaves,
  * where most of it is:
@@ -30,8 +29,7 @@
  * levels no longer fit the first-level cache, and the leaves are written
  * scattered over the result.
  */
-import { invMod } from './modular-arithmetic.js';
-import { dot3Mod, dot4Mod, dotMod, mulAddMod, mulMod, negMod } from './plucker-modular-kernels.js';
+import { dot3Mod, dot4Mod, dotMod, invMod, mulAddMod, mulMod, negMod } from './modular-arithmetic.js';
 import { binomial } from './subsets.js';
 
 /** How much arithmetic one run did, for the benchmarks' arithmetic floor. */

@@ -16,8 +16,7 @@
  * Exactness does not depend on a pivot being nonzero modulo p: the walk modulo
  * p computes every minor modulo p correctly whatever vanishes there.
  */
-import { MODULAR_LIMIT, invMod } from './modular-arithmetic.js';
-import { mulMod } from './plucker-modular-kernels.js';
+import { MODULAR_LIMIT, invMod, mulMod } from './modular-arithmetic.js';
 import { emptyModularWalkCounts, pluckerResidues, zeroDoubles, type ModularWalkCounts } from './plucker-modular.js';
 import { clearDenominators } from './plucker-fraction-free.js';
 import { QQ, type Rational } from './rational.js';

@@ -1,10 +1,10 @@
 import { test, describe } from 'node:test';
 import assert from 'node:assert/strict';
 import fc from 'fast-check';
-import { dot3Mod, dot4Mod, dotMod, mulAddMod, mulMod, negMod } from '../../server/src/engine/plucker-modular-kernels.js';
+import { dot3Mod, dot4Mod, dotMod, mulAddMod, mulMod, negMod } from '../../server/src/engine/modular-arithmetic.js';
 import { isPrime } from '../../server/src/engine/primes.js';
 
-// The branch-free kernels of the Plücker walks, compared with bigint arithmetic, which is exact by
+// The modular kernels of the Plücker walks and prime fields, compared with bigint arithmetic, which is exact by
 // construction (common practice, no source). The largest primes below 2^31 are where the kernels' error
 // margin is smallest and where a remainder's sign bit decides the correction; 2 and 3 are the smallest.
 const MODULI = [2147483647, 2147483629, 2147483587, 1000000007, 65521, 7, 3, 2];
@@ -22,7 +22,7 @@ function residue(p: number): fc.Arbitrary<number> {
 const big = (x: number) => BigInt(x);
 const modBig = (x: bigint, p: number) => Number(((x % big(p)) + big(p)) % big(p));
 
-describe('branch-free modular kernels for p < 2^31 against bigint arithmetic', () => {
+describe('modular kernels for p < 2^31 against bigint arithmetic', () => {
   for (const p of MODULI) {
     const r = 1 / p;
     test(`p = ${p}: products, multiply-adds and dot products of up to four terms`, () => {
