@@ -11,26 +11,18 @@
  */
 import { describe, test } from 'node:test';
 import assert from 'node:assert/strict';
-import { spawn } from 'node:child_process';
 import { mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, relative } from 'node:path';
 import {
-  createProtocolConnection,
   DidOpenTextDocumentNotification,
   DidSaveTextDocumentNotification,
   DocumentFormattingRequest,
   ExecuteCommandRequest,
-  ExitNotification,
-  InitializedNotification,
-  InitializeRequest,
-  PublishDiagnosticsNotification,
-  ShutdownRequest,
-  StreamMessageReader,
-  StreamMessageWriter,
 } from 'vscode-languageserver-protocol/node';
 import { EXPORT_LATEX_COMMAND } from '../../server/src/lsp/actions.js';
 import { assertBundleIsFresh, ROOT } from '../support/bundles.js';
+import { startServerSession } from '../lsp/server-process.js';
 
 const PRODUCTION = ['server/src', 'client/src', 'cli/src'];
 
@@ -86,39 +78,25 @@ describe('what the extension promises about safety', () => {
     const folders = ['cwd', 'home', 'tmp'].map((name) => join(root, name));
     for (const folder of folders) mkdirSync(folder);
     const [cwd, home, tmp] = folders as [string, string, string];
-    const child = spawn(process.execPath, [join(ROOT, 'dist/server.cjs'), '--stdio'], {
-      cwd,
-      env: { ...process.env, HOME: home, TMPDIR: tmp, TMP: tmp, TEMP: tmp },
-      stdio: ['pipe', 'pipe', 'pipe'],
-    });
-    const exited = new Promise((resolve) => child.on('exit', resolve));
-    const connection = createProtocolConnection(new StreamMessageReader(child.stdout), new StreamMessageWriter(child.stdin));
-    const uri = `file://${cwd}/never-written.wedge`;
-    const evaluated = new Promise<void>((resolve) =>
-      connection.onNotification(PublishDiagnosticsNotification.type, (p) => {
-        if (p.uri === uri) resolve();
-      }),
+    const session = await startServerSession(
+      {},
+      { cwd, env: { ...process.env, HOME: home, TMPDIR: tmp, TMP: tmp, TEMP: tmp }, rootUri: `file://${cwd}` },
     );
-    connection.listen();
+    const uri = `file://${cwd}/never-written.wedge`;
     try {
-      await connection.sendRequest(InitializeRequest.type, { processId: process.pid, rootUri: `file://${cwd}`, capabilities: {} });
-      await connection.sendNotification(InitializedNotification.type, {});
       const text = 'space V dim 4\nsubspace W = rows [1 0 2 0; 0 1 3 1]\nshow plucker(W)\nclaim dim W = 3\n';
-      await connection.sendNotification(DidOpenTextDocumentNotification.type, { textDocument: { uri, languageId: 'wedge', version: 1, text } });
-      await evaluated;
-      await connection.sendNotification(DidSaveTextDocumentNotification.type, { textDocument: { uri } });
-      await connection.sendRequest(DocumentFormattingRequest.type, { textDocument: { uri }, options: { tabSize: 2, insertSpaces: true } });
+      await session.connection.sendNotification(DidOpenTextDocumentNotification.type, { textDocument: { uri, languageId: 'wedge', version: 1, text } });
+      await session.diagnostics.next(uri);
+      await session.connection.sendNotification(DidSaveTextDocumentNotification.type, { textDocument: { uri } });
+      await session.connection.sendRequest(DocumentFormattingRequest.type, { textDocument: { uri }, options: { tabSize: 2, insertSpaces: true } });
       // The export answers with the LaTeX; the client, not the server, writes it where the user chose.
-      const exported = (await connection.sendRequest(ExecuteCommandRequest.type, { command: EXPORT_LATEX_COMMAND, arguments: [uri] })) as {
+      const exported = (await session.connection.sendRequest(ExecuteCommandRequest.type, { command: EXPORT_LATEX_COMMAND, arguments: [uri] })) as {
         latex?: string;
       } | null;
       assert.ok(exported?.latex?.includes('\\begin'), `the export answered LaTeX: ${JSON.stringify(exported)?.slice(0, 200)}`);
-      await connection.sendRequest(ShutdownRequest.type);
-      await connection.sendNotification(ExitNotification.type);
-      await exited;
+      await session.shutdown();
     } finally {
-      connection.dispose();
-      if (child.exitCode === null) child.kill();
+      session.kill();
     }
     for (const folder of folders) assert.deepEqual(readdirSync(folder), [], `${folder} stays empty`);
     rmSync(root, { recursive: true, force: true });

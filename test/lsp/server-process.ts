@@ -89,6 +89,11 @@ class NotificationLog {
 export interface SessionOptions {
   /** Client capabilities added to the test client's own (e.g. window.workDoneProgress, experimental). */
   capabilities?: ClientCapabilities;
+  /** The server's working folder and environment (by default the project's root and this process's). */
+  cwd?: string;
+  env?: NodeJS.ProcessEnv;
+  /** The workspace root the client announces. */
+  rootUri?: string | null;
 }
 
 export interface ServerSession {
@@ -116,7 +121,8 @@ export interface ServerSession {
 
 export async function startServerSession(settings: Record<string, unknown>, options: SessionOptions = {}): Promise<ServerSession> {
   const child = spawn(process.execPath, [join(ROOT, 'dist/server.cjs'), '--stdio'], {
-    cwd: ROOT,
+    cwd: options.cwd ?? ROOT,
+    ...(options.env ? { env: options.env } : {}),
     stdio: ['pipe', 'pipe', 'pipe'],
   });
   let stderr = '';
@@ -170,7 +176,7 @@ export async function startServerSession(settings: Record<string, unknown>, opti
   try {
     session.initializeResult = await connection.sendRequest(InitializeRequest.type, {
       processId: process.pid,
-      rootUri: null,
+      rootUri: options.rootUri ?? null,
       workspaceFolders: null,
       capabilities: {
         workspace: { configuration: true, didChangeConfiguration: { dynamicRegistration: false } },

@@ -7,6 +7,7 @@
  */
 import type { Field } from '../../server/src/engine/field.js';
 import type { Multivector } from '../../server/src/engine/multivector.js';
+import { inversionSign } from '../engine/exterior-arbitraries.js';
 
 /** All k-subsets of {0, …, n−1}, increasing, in lexicographic order. */
 export function subsetsOf(n: number, k: number): number[][] {
@@ -26,17 +27,8 @@ export function subsetsOf(n: number, k: number): number[][] {
   return out;
 }
 
-/** The sign of the permutation that sorts `indices` (0 when an index repeats), by counting inversions. */
-export function permutationSign(indices: readonly number[]): -1 | 0 | 1 {
-  let inversions = 0;
-  for (let i = 0; i < indices.length; i++) {
-    for (let j = i + 1; j < indices.length; j++) {
-      if (indices[i] === indices[j]) return 0;
-      if (indices[i]! > indices[j]!) inversions++;
-    }
-  }
-  return inversions % 2 === 0 ? 1 : -1;
-}
+/** The sign of the permutation that sorts `indices` (0 when an index repeats): the engine tests' own, by counting inversions. */
+export const permutationSign = inversionSign;
 
 const keyOf = (subset: readonly number[]) => subset.join(',');
 

@@ -216,9 +216,7 @@ export function startServer(connection: Connection, options: ServerOptions = {})
   function runQuickPass(uri: string): void {
     const entry = documents.get(uri);
     if (!entry || evaluationIsCurrent(entry)) return;
-    const started = performance.now();
-    documents.recordQuick(entry, analyze(entry.document.getText(), { evaluate: false }));
-    quickPassMs.set(uri, performance.now() - started);
+    ensureQuickPass(entry);
     publish(entry);
   }
 
