@@ -15,6 +15,7 @@ import {
 import { RestartPolicy } from './restart-policy.js';
 import { registerResultsView } from './results-view.js';
 import { exportLatex } from './export-latex.js';
+import { registerMacroCommands } from './macros-export.js';
 
 /** Must match the command the server's code lenses run (server/src/lsp/convert.ts). */
 const COPY_LATEX_COMMAND = 'wedgework.copyLatex';
@@ -72,6 +73,7 @@ export async function activate(context: vscode.ExtensionContext): Promise<void> 
   client = new LanguageClient('wedgework', 'Wedgework', serverOptions, clientOptions);
   // The results view (./results-view.ts) declares a client capability, so it is added before the start.
   registerResultsView(context, client);
+  registerMacroCommands(context, () => client);
 
   context.subscriptions.push(
     vscode.commands.registerCommand(COPY_LATEX_COMMAND, copyLatex),

@@ -58,10 +58,17 @@ describe('extension manifest', () => {
   });
 
   test('every command the client registers is contributed, in the Wedgework category', () => {
-    const client = readFileSync(join(ROOT, 'client/src/extension.ts'), 'utf8');
+    // The extension registers its own commands and, through ./macros-export.ts, the LaTeX macros commands.
+    const client = ['client/src/extension.ts', 'client/src/macros-export.ts'].map((f) => readFileSync(join(ROOT, f), 'utf8')).join('\n');
     const registered = [...client.matchAll(/'(wedgework\.[A-Za-z]+)'/g)].map((m) => m[1]!).sort();
     const contributed = manifest.contributes.commands.map((c: { command: string }) => c.command).sort();
-    assert.deepEqual(registered, ['wedgework.copyLatex', 'wedgework.exportLatex', 'wedgework.restartServer']);
+    assert.deepEqual(registered, [
+      'wedgework.copyLatex',
+      'wedgework.copyMacroReference',
+      'wedgework.exportLatex',
+      'wedgework.refreshMacrosExport',
+      'wedgework.restartServer',
+    ]);
     assert.deepEqual(contributed, registered);
     for (const command of manifest.contributes.commands) assert.equal(command.category, 'Wedgework');
     assert.ok(contributed.includes(COPY_LATEX_COMMAND), 'the command the code lenses run');

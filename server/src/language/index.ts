@@ -17,6 +17,10 @@ export * from './types.js';
 export * from './services/index.js';
 export { actionsAt, applyEdits } from './fixes/index.js';
 export { exportLatex } from './latex-export.js';
+export { buildMacros, macroReferencesAt, type MacroDefinition, type MacroOrigin, type MacroProblem, type MacroSet, type MacroSource } from './latex-macros.js';
+export { capitalise, codeMacroPart, MACRO_PREFIX, spellName, wordsOf } from './macro-names.js';
+export { parseMacrosFile, renderMacrosFile, type MacrosFileHeader, type MacrosFileSource, type ParsedMacro, type ParsedMacrosFile } from './macros-file.js';
+export { compareMacros, macroUses, undefinedMacroUses, type MacroDifference, type MacroUse } from './macros-sync.js';
 export { EvaluationMemo } from './statement-memo.js';
 export { EvaluationStopped } from './stopped.js';
 

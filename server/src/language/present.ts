@@ -17,6 +17,7 @@ import { formatCombination, formatMatrix, formatMatrixInline, formatMultivector,
 import { presentDirectionMoment, presentMatroid, presentMeet, presentPositivity } from './present-combinatorics.js';
 import { presentCompound, presentFlag, presentMap, presentQuotient, presentSchubert } from './present-geometry.js';
 import type { ChartValue, MultivectorValue, Scalar, SpaceInfo, SubspaceValue, Value, VectorValue } from './values.js';
+import type { ResultParts } from './types.js';
 import { basisImage, chartImage, pointPatternImage } from './svg/value-images.js';
 
 /** A picture as a paragraph of its own, or nothing when the value is past the legible sizes. */
@@ -30,6 +31,8 @@ export interface Presented {
   hover: string;
   latex: string;
   json: Record<string, unknown>;
+  /** Pieces of `latex` a paper may cite on their own (`Result.parts`). */
+  parts?: ResultParts;
 }
 
 /** How many coordinates a lens shows before it abbreviates. */
@@ -123,6 +126,7 @@ export function presentSubspace(env: Environment, w: SubspaceValue, lexPlucker: 
   let summary = `dim ${k} in ${w.space.name} · G(${k},${n})`;
   let latex = `\\operatorname{span}${matrixTex(env, w.basis.length ? w.basis : [new Array(n).fill(env.F.zero)])}`;
   let applied = env.convention.normalization;
+  const parts: ResultParts = { dim: String(k) };
   if (lexPlucker) {
     const point = displayPoint(env, lexPlucker, n, k);
     applied = point.applied;
@@ -144,6 +148,7 @@ export function presentSubspace(env: Environment, w: SubspaceValue, lexPlucker: 
       minorsOf: w.given ? 'given' : 'reduced',
     };
     latex = count <= LATEX_COORDINATES ? labelledPointLatex(env, point) : `${latex}, \\quad \\text{${count} Pl\\"ucker coordinates}`;
+    if (count <= LATEX_COORDINATES) parts.plucker = latex;
   }
   lines.push(
     '',
@@ -153,7 +158,7 @@ export function presentSubspace(env: Environment, w: SubspaceValue, lexPlucker: 
   );
   lines.push('', conventionSentence(env.convention, applied));
   json.convention = conventionJson(env.convention, applied);
-  return { summary: `${summary} · ${conventionTag(env.convention, applied)}`, hover: lines.join('\n'), latex, json };
+  return { summary: `${summary} · ${conventionTag(env.convention, applied)}`, hover: lines.join('\n'), latex, json, parts };
 }
 
 export function presentVector(env: Environment, v: VectorValue): Presented {

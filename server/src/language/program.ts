@@ -44,6 +44,7 @@ function result(kind: ResultKind, span: Span, anchor: Span, title: string, p: Pr
     hover: `${title}\n\n${p.hover}`,
     latex: p.latex,
     json: p.json,
+    ...(p.parts ? { parts: p.parts } : {}),
   };
 }
 

@@ -142,6 +142,17 @@ export interface Result {
   latex: string;
   /** Exact machine-readable form (documented in docs/cli-json.md). */
   json: Record<string, unknown>;
+  /**
+   * Pieces of `latex` a paper may cite on their own (see docs/latex-macros.md): for a subspace, `dim`
+   * (its dimension) and `plucker` (its labelled Plücker vector, when the LaTeX form lists it).
+   */
+  parts?: ResultParts;
+}
+
+/** LaTeX pieces of a result (`Result.parts`). */
+export interface ResultParts {
+  dim?: string;
+  plucker?: string;
 }
 
 /** What `analyze` returns. It never throws on user input. */

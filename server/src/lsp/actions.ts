@@ -22,6 +22,7 @@ import {
 import type { TextDocument } from 'vscode-languageserver-textdocument';
 import { actionsAt, exportLatex, type Analysis, type EditAction } from '../language/index.js';
 import { toDiagnostic, toRange } from './convert.js';
+import { EXPORT_MACROS_COMMAND, MACRO_COMMANDS, MACRO_REFERENCES_COMMAND, macroReferences, macrosExport, type MacrosExport } from './macros-commands.js';
 
 /**
  * The server-side command behind the client's "Export Results as LaTeX": it
@@ -36,7 +37,7 @@ export const ACTION_CAPABILITIES = {
     codeActionKinds: [CodeActionKind.QuickFix, CodeActionKind.RefactorRewrite, CodeActionKind.Refactor],
     resolveProvider: false,
   },
-  executeCommandProvider: { commands: [EXPORT_LATEX_COMMAND] },
+  executeCommandProvider: { commands: [EXPORT_LATEX_COMMAND, ...MACRO_COMMANDS] },
 } satisfies ServerCapabilities;
 
 /** What the server knows of an open document. */
@@ -130,10 +131,23 @@ export function registerActions(connection: Connection, host: ActionHost): void 
     }),
   );
   connection.onExecuteCommand(
-    host.guard('running a command', null as LatexExport | null, async ({ command, arguments: args }: ExecuteCommandParams) => {
-      if (command !== EXPORT_LATEX_COMMAND) return null;
+    host.guard('running a command', null as LatexExport | MacrosExport | string[] | null, async ({ command, arguments: args }: ExecuteCommandParams) => {
       const uri = args?.[0];
-      return typeof uri === 'string' ? latexExport(host, uri) : null;
+      if (typeof uri !== 'string') return null;
+      if (command === EXPORT_LATEX_COMMAND) return latexExport(host, uri);
+      if (command === MACRO_REFERENCES_COMMAND) {
+        const entry = host.document(uri);
+        if (!entry) return [];
+        // An evaluation of exactly the current text, so that the cursor's offset lands in the right statement.
+        return macroReferences(await host.evaluation(uri), entry.document.getText(), args?.[1]);
+      }
+      if (command === EXPORT_MACROS_COMMAND) {
+        const [, source, target, normalization] = args ?? [];
+        if (typeof source !== 'string' || typeof target !== 'string') return null;
+        const analysis = await host.evaluation(uri);
+        return analysis?.evaluated ? macrosExport(analysis, source, target, typeof normalization === 'string' ? normalization : undefined) : null;
+      }
+      return null;
     }),
   );
 }
