@@ -124,8 +124,8 @@ export async function runCli(args: readonly string[], version: string, io: CliIo
     const tex = command.tex ?? 'MACROS.tex';
     const exported = buildExport(checked, version, tex, command.normalization);
     const refresh = refreshCommand(tex, command.files, command.normalization);
-    findings.push(...macroProblems(exported.set, checked));
-    if (command.tex !== undefined) findings.push(...syncFindings(exported, command.tex, texText!, checked, version, refresh));
+    findings.push(...macroProblems(exported));
+    if (command.tex !== undefined) findings.push(...syncFindings(exported, command.tex, texText!, version, refresh));
     command.papers.forEach((paper, i) => findings.push(...paperFindings(exported, paper, paperTexts[i]!, command.tex)));
   }
   const macroErrors = findings.filter((f) => f.severity === 'error').length;
@@ -183,7 +183,7 @@ async function runExport(
   const counts = tally(checked);
   const exported = buildExport(checked, version, command.tex, command.normalization);
   const lines = checked.flatMap((c) => problemLines(c));
-  const problems = macroProblems(exported.set, checked);
+  const problems = macroProblems(exported);
   lines.push(...findingLines(problems));
   lines.push(summaryLine(checked.length, counts));
   if (problems.length > 0) {

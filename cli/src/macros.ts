@@ -4,6 +4,7 @@
  * `file:line:col` lines (docs/latex-macros.md describes both).
  */
 import { createHash } from 'node:crypto';
+import { basename, dirname, relative, resolve, sep } from 'node:path';
 import {
   buildMacros,
   compareMacros,
@@ -48,35 +49,52 @@ export function refreshCommand(tex: string, files: readonly string[], normalizat
 export interface Export {
   set: MacroSet;
   text: string;
+  /** Each checked file by the name the export calls it (its path from the macros file's folder). */
+  files: Map<string, CheckedFile>;
+}
+
+/**
+ * A computation file's path from the folder of the macros file, with `/` separators: the name the
+ * header and the comments use, so that the export is the same text whichever folder the command runs
+ * in (and the same as the editor's, which names sources the same way).
+ */
+export function exportPath(tex: string, file: string): string {
+  return relative(dirname(resolve(tex)), resolve(file)).split(sep).join('/');
 }
 
 /** The macros of the checked files and the text of the macros file, computed in memory. */
 export function buildExport(checked: readonly CheckedFile[], version: string, tex: string, normalization: Normalization): Export {
-  const set = buildMacros(checked.map((c) => ({ file: c.file, analysis: c.analysis })));
-  const sources = checked.map((c) => ({
-    path: c.file,
+  const files = new Map(checked.map((c) => [exportPath(tex, c.file), c]));
+  const set = buildMacros([...files].map(([file, c]) => ({ file, analysis: c.analysis })));
+  const sources = [...files].map(([path, c]) => ({
+    path,
     sha256: sha256(c.text),
     convention: c.analysis.convention ?? 'not evaluated',
   }));
   const guard = sha256(sources.map((s) => `${s.path}\u0000${s.sha256}`).join('\u0000')).slice(0, 16);
   const text = renderMacrosFile(
-    { version, sources, refresh: refreshCommand(tex, checked.map((c) => c.file), normalization), guard },
+    {
+      version,
+      sources,
+      // Run in the macros file's folder, where the sources' paths start.
+      refresh: refreshCommand(basename(tex), [...files.keys()], normalization),
+      guard,
+    },
     set.macros,
   );
-  return { set, text };
+  return { set, text, files };
 }
 
-function textOf(checked: readonly CheckedFile[], file: string): string {
-  return checked.find((c) => c.file === file)?.text ?? '';
-}
-
-function place(checked: readonly CheckedFile[], file: string, span: Span) {
-  return { file, text: textOf(checked, file), offset: span.start };
+/** A statement's place, in the checked file the export names `file`, as the command line was given it. */
+function place(files: Export['files'], file: string, span: Span) {
+  const checked = files.get(file);
+  return { file: checked?.file ?? file, text: checked?.text ?? '', offset: span.start };
 }
 
 /** Clashes and names without a spelling, at their statements. */
-export function macroProblems(set: MacroSet, checked: readonly CheckedFile[]): MacroFinding[] {
-  return set.problems.map((p) => {
+export function macroProblems(exported: Export): MacroFinding[] {
+  const checked = exported.files;
+  return exported.set.problems.map((p) => {
     const [first, ...others] = p.places;
     return {
       ...place(checked, first!.file, first!.span),
@@ -107,7 +125,8 @@ function differs(was: string, now: string): string {
  * each difference is an error at the statement that gives the macro, or at the file's line for a
  * macro that is gone; when only the header's sources or version differ, one note.
  */
-export function syncFindings(exported: Export, tex: string, texText: string, checked: readonly CheckedFile[], version: string, refresh: string): MacroFinding[] {
+export function syncFindings(exported: Export, tex: string, texText: string, version: string, refresh: string): MacroFinding[] {
+  const checked = exported.files;
   const parsed = parseMacrosFile(texText);
   if (!parsed.generated) {
     return [{ file: tex, text: texText, offset: 0, severity: 'error', code: 'macro/not-an-export', message: `${tex} is not a macros file written by wedgework export (its first line says so); write it with: ${refresh}` }];

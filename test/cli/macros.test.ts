@@ -60,6 +60,18 @@ describe('export and sync check, in-process', () => {
     assert.equal(disk.get('plane.wedge'), PLANE, 'the input is untouched');
   });
 
+  test('the export names its sources from its own folder, so it is the same text from any working folder', async () => {
+    const { disk, run } = memoryFolder({ 'plane.wedge': PLANE, 'paper/plane.wedge': PLANE });
+    assert.equal((await run('export', '--tex', 'results.tex', 'plane.wedge')).status, 0);
+    assert.equal((await run('export', '--tex', 'paper/results.tex', 'paper/plane.wedge')).status, 0);
+    assert.equal(disk.get('paper/results.tex'), disk.get('results.tex'));
+    assert.match(disk.get('paper/results.tex')!, /^% Source: plane\.wedge sha256/m);
+    // Checked from the parent folder: in sync, without even a note about the header.
+    const checked = await run('check', '--tex', 'paper/results.tex', 'paper/plane.wedge');
+    assert.equal(checked.status, 0, checked.stdout);
+    assert.doesNotMatch(checked.stdout, /note:/);
+  });
+
   test('a changed value makes the check fail at the statement, until the export is refreshed', async () => {
     const { disk, run } = memoryFolder({ 'plane.wedge': PLANE });
     await run('export', '--tex', 'results.tex', 'plane.wedge');

@@ -105,7 +105,7 @@ describe('which results give macros, and their values', () => {
 
   test('the macro references of the statement at the cursor, main macro first', () => {
     const analysis = analyze(FILE, { evaluate: true });
-    assert.deepEqual(macroReferencesAt(analysis, FILE.indexOf('subspace L') + 3), ['\\wwL', '\\wwLDim', '\\wwLPlucker']);
+    assert.deepEqual(macroReferencesAt(analysis, FILE.indexOf('subspace L') + 3), ['\\wwL', '\\wwLDim', '\\wwLBasis', '\\wwLPlucker']);
     assert.deepEqual(macroReferencesAt(analysis, FILE.indexOf('show chart') + 1), ['\\wwChartLOneThree']);
     assert.deepEqual(macroReferencesAt(analysis, FILE.indexOf('# nothing')), []);
   });

@@ -44,3 +44,28 @@ export function vectorOf(text: string, name: string): number[] {
   if (!m) throw new Error(`no vector ${name} in the file`);
   return m[1]!.split(',').map((x) => Number(x.trim()));
 }
+
+/**
+ * The reduced row echelon form of integer rows (common practice, no source), by Gauss–Jordan
+ * elimination on mathjs fractions; rows of zeros dropped. Entries as numbers (they are integers in the
+ * sample paper).
+ */
+export function reducedRows(rows: readonly (readonly number[])[]): number[][] {
+  const m = rows.map((r) => r.map((x) => math.fraction(x)));
+  const width = m[0]?.length ?? 0;
+  let pivotRow = 0;
+  for (let col = 0; col < width && pivotRow < m.length; col++) {
+    const found = m.findIndex((r, i) => i >= pivotRow && !math.equal(r[col]!, 0));
+    if (found < 0) continue;
+    [m[pivotRow], m[found]] = [m[found]!, m[pivotRow]!];
+    const pivot = m[pivotRow]![col]!;
+    m[pivotRow] = m[pivotRow]!.map((x) => math.divide(x, pivot) as typeof x);
+    for (let i = 0; i < m.length; i++) {
+      if (i === pivotRow || math.equal(m[i]![col]!, 0)) continue;
+      const factor = m[i]![col]!;
+      m[i] = m[i]!.map((x, j) => math.subtract(x, math.multiply(factor, m[pivotRow]![j]!)) as typeof x);
+    }
+    pivotRow++;
+  }
+  return m.slice(0, pivotRow).map((r) => r.map((x) => math.number(x) as number));
+}

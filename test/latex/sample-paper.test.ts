@@ -15,7 +15,7 @@ import { join } from 'node:path';
 import { runCli } from '../../cli/src/cli.js';
 import { ROOT } from '../support/bundles.js';
 import { compileToText, requireTexTools, scratchFolder, squeeze } from './tex-engine.js';
-import { maximalMinors, pointText, primitive, vectorOf } from './reference-values.js';
+import { maximalMinors, pointText, primitive, reducedRows, vectorOf } from './reference-values.js';
 
 const LABELS = 'p12,p13,p14,p15,p23,p24,p25,p34,p35,p45=';
 
@@ -46,9 +46,23 @@ describe('the sample paper, compiled', { timeout: 120_000 }, () => {
     const pdf = squeeze(compileToText(folder.dir, 'paper'));
     assert.ok(pdf.includes(squeeze(`${LABELS}${pointText(primitive(maximalMinors([a!, b!])))}`)), 'the Plücker vector of W');
     assert.ok(pdf.includes(squeeze(`${LABELS}${pointText(primitive(maximalMinors([b!, c!])))}`)), 'the Plücker vector of U');
-    assert.ok(pdf.includes(squeeze('W has dimension 2 and')), 'W is a plane');
+    assert.ok(pdf.includes(squeeze('W has dimension 2, reduced basis')), 'W is a plane');
+    for (const row of reducedRows([a!, b!])) assert.ok(pdf.includes(squeeze(row.join(' '))), `the reduced basis row ${row.join(' ')}`);
     assert.ok(pdf.includes(squeeze('span a space of dimension 3.')), 'a, b, c are independent');
     assert.ok(pdf.includes(squeeze('the claim that b lies on it holds')));
+  });
+
+  test('the decomposition the paper prints wedges back to the form', () => {
+    // ω = e1∧e2 + e1∧e3 + e2∧e3: the coordinates p12, p13, p23 are 1, the others 0 (lexicographic order).
+    const omega = [1, 1, 0, 0, 1, 0, 0, 0, 0, 0];
+    const macros = readFileSync(join(folder.dir, 'results.tex'), 'utf8');
+    const line = /\\newcommand\{\\wwomegaDecomposition\}\{(.*)\}$/m.exec(macros)?.[1] ?? '';
+    const vectors = [...line.matchAll(/\\begin\{pmatrix\}(.*?)\\end\{pmatrix\}/g)].map((m) => m[1]!.split('&').map((x) => Number(x.trim())));
+    assert.equal(vectors.length, 2, line);
+    assert.deepEqual(primitive(maximalMinors(vectors)), omega, 'the two vectors wedge to ω (mathjs minors)');
+    const pdf = squeeze(compileToText(folder.dir, 'paper'));
+    const printed = squeeze(`${vectors[0]!.join(' ')} ∧ ${vectors[1]!.join(' ')}`);
+    assert.ok(pdf.includes(printed), 'printed in the PDF');
   });
 
   test('after a change and a refresh of the export, the PDF shows the new values', async () => {

@@ -25,6 +25,7 @@ import {
 } from 'vscode-languageserver-protocol/node';
 import { analyze } from '../../server/src/language/index.js';
 import { ACTION_CAPABILITIES, codeActionsFor, EXPORT_LATEX_COMMAND, fileNameOfUri, type LatexExport } from '../../server/src/lsp/actions.js';
+import { MACRO_COMMANDS } from '../../server/src/lsp/macros-commands.js';
 import { SERVER_CAPABILITIES } from '../../server/src/lsp/server.js';
 import { assertBundleIsFresh, ROOT } from '../support/bundles.js';
 import { startServerSession, type ServerSession } from './server-process.js';
@@ -96,7 +97,7 @@ describe('code actions from an analysis', () => {
 
   test('the server announces code actions and the export command', () => {
     assert.deepEqual(SERVER_CAPABILITIES.codeActionProvider, ACTION_CAPABILITIES.codeActionProvider);
-    assert.deepEqual(SERVER_CAPABILITIES.executeCommandProvider?.commands, [EXPORT_LATEX_COMMAND]);
+    assert.deepEqual(SERVER_CAPABILITIES.executeCommandProvider?.commands, [EXPORT_LATEX_COMMAND, ...MACRO_COMMANDS]);
     assert.equal(fileNameOfUri('file:///a/b/three%20planes.wedge'), 'three planes.wedge');
   });
 

@@ -3,8 +3,10 @@
  * clashes between names (the rule is documented in docs/latex-macros.md).
  *
  * - Every declared name (space, vector, subspace, multivector, map, flag) gets `\ww<Name>`, typesetting
- *   the result's LaTeX; a subspace also gets `\ww<Name>Dim` (its dimension) and `\ww<Name>Plucker` (its
- *   labelled Plücker vector, when the LaTeX form lists it).
+ *   the result's LaTeX; a subspace also gets `\ww<Name>Dim` (its dimension), `\ww<Name>Basis` (its
+ *   basis matrix) and `\ww<Name>Plucker` (its labelled Plücker vector, when the LaTeX form lists it); a
+ *   multivector gets `\ww<Name>Form` (its terms) and `\ww<Name>Decomposition` (as a wedge of vectors)
+ *   or `\ww<Name>Relation` (the quadratic relation it fails, with the value).
  * - Every `show` line gets `\ww<Words>`, from the names and numbers of its expression.
  * - Every claim gets `\wwClaim<Words>` (its outcome: the claim's LaTeX, or its verdict when it has none)
  *   and `\wwClaim<Words>Verdict` (`holds` or `false`).
@@ -12,7 +14,7 @@
  * Pure: the caller reads the files and says what they are called.
  */
 import { capitalise, codeMacroPart, MACRO_PREFIX, spellName } from './macro-names.js';
-import type { Analysis, Result, Span } from './types.js';
+import type { Analysis, Result, ResultParts, Span } from './types.js';
 
 /** One evaluated file and the name the output should call it by. */
 export interface MacroSource {
@@ -102,9 +104,18 @@ function candidatesOf(analysis: Analysis, r: Result): { what: string; candidates
   const base = spelled === undefined ? undefined : `${MACRO_PREFIX}${spelled}`;
   const candidates: Candidate[] = [];
   if (r.latex.trim().length > 0) candidates.push({ name: base, value: math(r.latex) });
-  if (r.kind === 'subspace') {
-    if (r.parts?.dim !== undefined) candidates.push({ name: base && `${base}Dim`, value: math(r.parts.dim) });
-    if (r.parts?.plucker !== undefined) candidates.push({ name: base && `${base}Plucker`, value: math(r.parts.plucker) });
+  // The pieces a result has, each as `\ww<Name><Piece>`, in this order.
+  const pieces: [keyof ResultParts, string][] = [
+    ['dim', 'Dim'],
+    ['basis', 'Basis'],
+    ['plucker', 'Plucker'],
+    ['form', 'Form'],
+    ['decomposition', 'Decomposition'],
+    ['relation', 'Relation'],
+  ];
+  for (const [key, suffix] of pieces) {
+    const piece = r.parts?.[key];
+    if (piece !== undefined) candidates.push({ name: base && `${base}${suffix}`, value: math(piece) });
   }
   return { what: `${r.kind} ${r.name ?? ''}`.trim(), candidates };
 }

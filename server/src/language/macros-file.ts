@@ -42,7 +42,7 @@ export function renderMacrosFile(header: MacrosFileHeader, macros: readonly Macr
   const guard = `wedgework@macros@${header.guard.replace(/[^A-Za-z0-9]/g, '')}`;
   const lines = [
     comment(`Wedgework ${header.version}: LaTeX macros of computed results.`),
-    comment(`Generated file, do not edit: refresh it with  ${header.refresh}`),
+    comment(`Generated file, do not edit: refresh it, in the folder of this file, with  ${header.refresh}`),
     ...header.sources.map((s) => comment(`Source: ${s.path} sha256 ${s.sha256}`)),
     ...header.sources.map((s) => comment(`Convention of ${s.path}: ${s.convention.replace(/^Convention:\s*/, '')}`)),
     comment('Needs amsmath and amssymb. \\input it once or more: a second reading stops at the guard below.'),

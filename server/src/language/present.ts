@@ -126,7 +126,7 @@ export function presentSubspace(env: Environment, w: SubspaceValue, lexPlucker: 
   let summary = `dim ${k} in ${w.space.name} · G(${k},${n})`;
   let latex = `\\operatorname{span}${matrixTex(env, w.basis.length ? w.basis : [new Array(n).fill(env.F.zero)])}`;
   let applied = env.convention.normalization;
-  const parts: ResultParts = { dim: String(k) };
+  const parts: ResultParts = { dim: String(k), basis: matrixTex(env, w.basis.length ? w.basis : [new Array(n).fill(env.F.zero)]) };
   if (lexPlucker) {
     const point = displayPoint(env, lexPlucker, n, k);
     applied = point.applied;
@@ -197,6 +197,7 @@ export function presentMultivector(env: Environment, v: MultivectorValue): Prese
   };
   let summary: string;
   let latex = multivectorLatex(F, v.mv, v.space.basisNames);
+  const parts: ResultParts = { form: latex };
   let applied = env.convention.normalization;
   if (terms.length === 0) {
     summary = `the zero element of ∧^${k} ${v.space.name}`;
@@ -225,6 +226,7 @@ export function presentMultivector(env: Environment, v: MultivectorValue): Prese
       json.scalar = s(env, d.scalar);
       json.subspace = d.basis.map((r) => r.map((x) => s(env, x)));
       latex = `${latex} = ${F.isOne(d.scalar) ? '' : `${F.latex(d.scalar)}\\,`}${d.basis.map((r) => matrixTex(env, [r])).join(' \\wedge ')}`;
+      parts.decomposition = latex;
     } else if (d.kind === 'not-decomposable') {
       summary = `not decomposable · ${relationFormula(env, d.relation, n)} = ${s(env, d.relation.value)} ≠ 0 · divisors dim ${d.divisorDimension}`;
       lines.push(
@@ -250,6 +252,7 @@ export function presentMultivector(env: Environment, v: MultivectorValue): Prese
       };
       json.divisorDimension = d.divisorDimension;
       latex = relationLatex(env, d.relation, n);
+      parts.relation = latex;
     } else {
       summary = 'zero';
     }
@@ -257,7 +260,7 @@ export function presentMultivector(env: Environment, v: MultivectorValue): Prese
   }
   lines.push('', conventionSentence(env.convention, applied));
   json.convention = conventionJson(env.convention, applied);
-  return { summary: `${summary} · ${conventionTag(env.convention, applied)}`, hover: lines.join('\n'), latex, json };
+  return { summary: `${summary} · ${conventionTag(env.convention, applied)}`, hover: lines.join('\n'), latex, json, parts };
 }
 
 export function presentChart(env: Environment, c: ChartValue): Presented {

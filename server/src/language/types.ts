@@ -144,7 +144,9 @@ export interface Result {
   json: Record<string, unknown>;
   /**
    * Pieces of `latex` a paper may cite on their own (see docs/latex-macros.md): for a subspace, `dim`
-   * (its dimension) and `plucker` (its labelled Plücker vector, when the LaTeX form lists it).
+   * (its dimension), `basis` (its basis matrix) and `plucker` (its labelled Plücker vector, when the
+   * LaTeX form lists it); for a multivector, `form` (its terms) and either `decomposition` (it as a
+   * wedge of vectors) or `relation` (the quadratic relation it fails, with the value).
    */
   parts?: ResultParts;
 }
@@ -152,7 +154,11 @@ export interface Result {
 /** LaTeX pieces of a result (`Result.parts`). */
 export interface ResultParts {
   dim?: string;
+  basis?: string;
   plucker?: string;
+  form?: string;
+  decomposition?: string;
+  relation?: string;
 }
 
 /** What `analyze` returns. It never throws on user input. */
