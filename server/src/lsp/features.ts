@@ -39,6 +39,7 @@ import {
   ResponseError,
   SymbolKind,
   type CompletionItem,
+  type CompletionList,
   type Connection,
   type DocumentSymbol,
   type FoldingRange,
@@ -206,12 +207,12 @@ export function registerFeatures(connection: Connection, host: FeatureHost): voi
   }
 
   connection.onCompletion(
-    guard('completing', [] as CompletionItem[], async ({ textDocument, position, context }) => {
+    guard('completing', [] as CompletionItem[] | CompletionList, async ({ textDocument, position, context }) => {
       const found = await analysisOf(textDocument.uri);
       if (!found) return [];
       const { document, analysis } = found;
       const afterSpace = context?.triggerKind === CompletionTriggerKind.TriggerCharacter && context.triggerCharacter === ' ';
-      return completionsAt(analysis, document.offsetAt(position), { afterSpace }).map((c): CompletionItem => {
+      const items = completionsAt(analysis, document.offsetAt(position), { afterSpace }).map((c): CompletionItem => {
         const range = toRange(document, c.replace);
         return {
           label: c.label,
@@ -224,6 +225,9 @@ export function registerFeatures(connection: Connection, host: FeatureHost): voi
           textEdit: { range, newText: c.snippet ?? c.insertText },
         };
       });
+      // After a space only the fixed words are offered (often none); marked incomplete, so that the editor
+      // asks again on the next letter instead of filtering this short list (and showing nothing).
+      return afterSpace ? { isIncomplete: true, items } : items;
     }),
   );
 
