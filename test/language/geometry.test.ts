@@ -324,6 +324,21 @@ describe('finite fields for subspace codes', () => {
     assert.deepEqual(resultNamed(a, 'v').json.coordinates, ['w', 'w + 1']);
   });
 
+  test('the generator inside a bracket: entries w, 2w, w^2 and (w + 1) are the field elements they name', () => {
+    // In GF(4), w² = w + 1 and 2 = 0 (characteristic 2; common practice, no source): the bracket's rows
+    // are (1, w, w + 1) and (0, 1, w + 1), the same plane as the tuples below.
+    const a = expectAnalysis(`
+      field GF(4) generator w
+      space V dim 3
+      subspace W = rows [ 1 w w^2
+                          2w 1 (w + 1) ]
+      subspace U = span((1, w, w + 1), (0, 1, w + 1))
+      claim W = U
+      claim dim W = 2
+    `);
+    assert.equal(a.problems.length, 0);
+  });
+
   test('the number of k-subspaces is the Gaussian binomial, and the listing agrees', () => {
     // [4 choose 2]_q = (q⁴−1)(q³−1)/((q²−1)(q−1)): 35 for q = 2 and 357 for q = 4 (OEIS A022166 and
     // A022168 — from memory); points of P³(GF(4)): (4⁴−1)/(4−1) = 85.

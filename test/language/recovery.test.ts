@@ -77,11 +77,24 @@ describe('one problem at the offending token', () => {
     assert.match(problems[0]!.message, /keyword/);
   });
 
-  test('a name inside a matrix', () => {
-    expectProblems(`
-      subspace M = rows [1 0 x]
-      #                      ^ syntax/missing-token
+  test('a name inside a matrix is an entry (a parameter or a field generator), with its expression', () => {
+    const { program } = expectProblems(`
+      subspace M = rows [1 0 x 2x -x^2 (x + 1)]
     `);
+    const value = (program.statements[0] as DeclStmt).value;
+    assert.equal(value.type, 'rows');
+    const entries = value.type === 'rows' ? value.matrix.rows[0]! : [];
+    assert.deepEqual(entries.map((e) => e.text), ['1', '0', 'x', '2x', '-x^2', '(x + 1)']);
+    assert.deepEqual(entries.map((e) => e.expr?.type), [undefined, undefined, 'name', 'binary', 'unary', 'binary']);
+  });
+
+  test('a number and a name apart are two entries; together, one product', () => {
+    const { program } = expectProblems(`
+      subspace M = rows [2 x ; 2x 1]
+    `);
+    const value = (program.statements[0] as DeclStmt).value;
+    const rows = value.type === 'rows' ? value.matrix.rows : [];
+    assert.deepEqual(rows.map((r) => r.map((e) => e.text)), [['2', 'x'], ['2x', '1']]);
   });
 
   test('a character that is not part of the language drops its statement and reports only itself', () => {
@@ -210,7 +223,7 @@ describe('recovery across a file', () => {
       'vector p =\n#        ^ syntax/unexpected-token',
       'claim p not\n#       ^^^ syntax/unexpected-token',
       'show [1 0\n#       ^ syntax/missing-token',
-      'show {12:\n#       ^ syntax/missing-token',
+      'show {12:\n#       ^ syntax/unexpected-token',
       'show V.\n#     ^ syntax/missing-token',
       'show (1, 2   # a trailing comment\n#        ^ syntax/missing-token',
     ]) {

@@ -222,10 +222,15 @@ export interface Tuple {
   items: Expr[];
 }
 
-/** One exact rational literal inside brackets, sign included: '-1/2', '3', '+0.5'. */
+/**
+ * One entry inside brackets: an exact rational literal, sign included ('-1/2', '3', '+0.5'), or an
+ * entry with names (a parameter or a field generator: `t`, `2t^2`, `(1 + t)`), which carries the
+ * expression it stands for in `expr`; `text` is then a readable spelling of it.
+ */
 export interface Entry {
   span: Span;
   text: string;
+  expr?: Expr;
 }
 
 /** `[1 0 2; 0 1 3]`: rows split by `;` or by source line. */
@@ -285,4 +290,10 @@ export interface DimExpr {
   span: Span;
   keyword: Span;
   operand: Expr;
+}
+
+/** The expressions inside the entries of a bracket or index-set literal (entries with names: `t`, `2t^2`). */
+export function entryExpressions(e: MatrixLit | PointLit | IndexMapLit): Expr[] {
+  const entries = e.type === 'matrix' ? e.rows.flat() : e.type === 'point' ? e.entries : e.entries.map((x) => x.value);
+  return entries.flatMap((x) => (x.expr ? [x.expr] : []));
 }

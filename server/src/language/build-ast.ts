@@ -96,6 +96,22 @@ function child(node: CstNode, label: string): CstNode {
   return found;
 }
 
+/** Every token under a node, in source order. */
+function tokensOf(node: CstNode): IToken[] {
+  const out: IToken[] = [];
+  const visit = (n: CstNode): void => {
+    for (const elements of Object.values(n.children)) {
+      for (const e of elements) {
+        if (isToken(e)) {
+          if (isRealToken(e)) out.push(e);
+        } else visit(e);
+      }
+    }
+  };
+  visit(node);
+  return out.sort((a, b) => a.startOffset - b.startOffset);
+}
+
 function ident(token: IToken): Ident {
   return { span: tokenSpan(token), name: token.image };
 }
@@ -403,20 +419,69 @@ class StatementBuilder {
     return { node: { type: 'tuple', span: extent, items: items.map((i) => i.node) }, extent };
   }
 
-  private entry(node: CstNode): { entry: Entry; first: IToken; last: IToken } {
+  /**
+   * The entries one `entry` node holds: usually one; two when a rational and a factor stand apart
+   * (`[2 t]` is the entries 2 and t, `[2t]` the one entry 2·t). An entry that is not a plain rational
+   * carries the expression it stands for.
+   */
+  private entries(node: CstNode): { entry: Entry; first: IToken; last: IToken }[] {
     const sign = optionalToken(node, 'sign');
-    const numerator = token(node, 'numerator');
+    const numerator = optionalToken(node, 'numerator');
     const slash = optionalToken(node, 'slash');
     const denominator = optionalToken(node, 'denominator');
     if ((slash === undefined) !== (denominator === undefined)) throw new Incomplete();
-    const parts = [sign, numerator, slash, denominator].filter((t): t is IToken => t !== undefined);
-    const first = parts[0]!;
-    const last = parts[parts.length - 1]!;
-    return {
-      entry: { span: join(tokenSpan(first), tokenSpan(last)), text: parts.map((t) => t.image).join('') },
-      first,
-      last,
+    const factorNode = optionalNode(node, 'factor');
+    const factor = factorNode ? this.entryFactor(factorNode) : undefined;
+    const numberParts = [sign, numerator, slash, denominator].filter((t): t is IToken => t !== undefined);
+    const rational = (parts: IToken[]) => {
+      const first = parts[0]!;
+      const last = parts[parts.length - 1]!;
+      return { entry: { span: join(tokenSpan(first), tokenSpan(last)), text: parts.map((t) => t.image).join('') }, first, last };
     };
+    if (!factor) return [rational(numberParts)];
+    if (!numerator) {
+      // A factor with an optional sign: `t`, `-t^2`, `(1 + t)`.
+      const first = sign ?? factor.first;
+      const span = join(tokenSpan(first), tokenSpan(factor.last));
+      const expr: Expr = sign ? { type: 'unary', span, op: sign.image === '-' ? '-' : '+', operand: factor.expr } : factor.expr;
+      return [{ entry: { span, text: `${sign?.image ?? ''}${factor.text}`, expr }, first, last: factor.last }];
+    }
+    const numberPart = rational(numberParts);
+    const last = denominator ?? numerator;
+    if (factor.first.startOffset > last.endOffset! + 1) return [numberPart, { entry: { span: factor.expr.span, text: factor.text, expr: factor.expr }, first: factor.first, last: factor.last }];
+    // `2t`, `-1/2 t^2` written together: the rational times the factor.
+    const numberSpan = join(tokenSpan(numerator), tokenSpan(last));
+    let coefficient: Expr = numberLit(numerator);
+    if (denominator) coefficient = { type: 'binary', span: numberSpan, op: '/', opSpan: tokenSpan(slash!), left: coefficient, right: numberLit(denominator) };
+    const span = join(numberPart.entry.span, factor.expr.span);
+    let expr: Expr = { type: 'binary', span: join(numberSpan, factor.expr.span), op: '*', opSpan: { start: last.endOffset! + 1, end: factor.first.startOffset }, implicit: true, left: coefficient, right: factor.expr };
+    if (sign) expr = { type: 'unary', span, op: sign.image === '-' ? '-' : '+', operand: expr };
+    return [{ entry: { span, text: `${numberPart.entry.text}${factor.text}`, expr }, first: numberPart.first, last: factor.last }];
+  }
+
+  /** `t`, `t^2` or `( expression )` inside an entry, with its first and last tokens. */
+  private entryFactor(node: CstNode): { expr: Expr; text: string; first: IToken; last: IToken } {
+    const name = optionalToken(node, 'name');
+    if (name) {
+      const caret = optionalToken(node, 'caret');
+      const exponent = optionalToken(node, 'exponent');
+      if ((caret === undefined) !== (exponent === undefined)) throw new Incomplete();
+      const base: Expr = { type: 'name', span: tokenSpan(name), name: ident(name) };
+      if (!caret || !exponent) return { expr: base, text: name.image, first: name, last: name };
+      if (caret.image !== '^') this.reject('syntax/unexpected-token', tokenSpan(caret), `a power inside a bracket is written with '^' (t^2); '${caret.image}' is the wedge product`);
+      const span = join(tokenSpan(name), tokenSpan(exponent));
+      return {
+        expr: { type: 'binary', span, op: '^', opSpan: tokenSpan(caret), left: base, right: numberLit(exponent) },
+        text: `${name.image}^${exponent.image}`,
+        first: name,
+        last: exponent,
+      };
+    }
+    const open = token(node, 'open');
+    const close = token(node, 'close');
+    const inner = this.expression(child(node, 'inner')).node;
+    const span = join(tokenSpan(open), tokenSpan(close));
+    return { expr: inner, text: `(${tokensOf(child(node, 'inner')).map((t) => t.image).join(' ')})`, first: open, last: close };
   }
 
   /**
@@ -431,11 +496,15 @@ class StatementBuilder {
    */
   bracket(node: CstNode): MatrixLit | PointLit {
     const span = join(tokenSpan(token(node, 'open')), tokenSpan(token(node, 'close')));
-    const first = this.entry(child(node, 'first'));
-    const items = nodes(node, 'item').map((item) => ({
-      separator: optionalToken(item, 'separator'),
-      ...this.entry(child(item, 'entry')),
-    }));
+    const [first, ...rest] = this.entries(child(node, 'first'));
+    // A second entry split off an item (`2 t`) follows its first with a bare gap.
+    const items = [
+      ...rest.map((e) => ({ separator: undefined as IToken | undefined, ...e })),
+      ...nodes(node, 'item').flatMap((item) =>
+        this.entries(child(item, 'entry')).map((e, i) => ({ separator: i === 0 ? optionalToken(item, 'separator') : undefined, ...e })),
+      ),
+    ];
+    if (!first) throw new Incomplete();
     const isPoint = items.length > 0 && items[0]!.separator?.tokenType === T.Colon;
     for (const item of items) {
       const isColon = item.separator?.tokenType === T.Colon;
@@ -484,7 +553,9 @@ class StatementBuilder {
     const span = join(tokenSpan(token(node, 'open')), tokenSpan(token(node, 'close')));
     const entries = nodes(node, 'item').map((item) => {
       const key = this.indexKey(child(item, 'key'));
-      const value = this.entry(child(item, 'value')).entry;
+      const values = this.entries(child(item, 'value'));
+      if (values.length > 1) this.reject('syntax/unexpected-token', values[1]!.entry.span, `one value per index set: write the product without a space (${values[0]!.entry.text}${values[1]!.entry.text}) or put ',' between entries`);
+      const value = values[0]!.entry;
       return { key, value, span: join(key.span, value.span) };
     });
     return { type: 'indexmap', span, entries };

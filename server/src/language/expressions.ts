@@ -111,7 +111,10 @@ function literal(env: Environment, text: string, span: Span): Scalar {
 }
 
 function entry(env: Environment, x: Entry): Scalar {
-  return literal(env, x.text, x.span);
+  if (!x.expr) return literal(env, x.text, x.span);
+  const value = evaluate(env, x.expr, {});
+  if (value.t !== 'scalar') fail('type/operand', x.span, `an entry is a number, found ${describeValue(value)}`);
+  return value.value;
 }
 
 function lookup(env: Environment, e: NameRef): Value {

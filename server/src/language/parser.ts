@@ -425,7 +425,13 @@ export class StatementParser extends CstParser {
     this.SUBRULE(this.entry);
   });
 
-  /** One exact rational: an optional sign, a number, and optionally `/` and a denominator. */
+  /**
+   * One entry: an optional sign, then an exact rational (a number, optionally `/` and a denominator),
+   * a factor (a name such as a parameter or a field generator, optionally `^` and a whole number, or a
+   * parenthesised expression), or a rational followed by a factor. Whether a rational and a factor
+   * written one after the other are one entry (`2t`) or two (`2 t`) depends on the space between them,
+   * which the tree builder sees (./build-ast.ts); the grammar reads both the same way.
+   */
   entry = this.RULE('entry', () => {
     this.OPTION(() => {
       this.OR([
@@ -433,11 +439,41 @@ export class StatementParser extends CstParser {
         { ALT: () => this.CONSUME(Plus, { LABEL: 'sign' }) },
       ]);
     });
-    this.CONSUME(NumberLiteral, { LABEL: 'numerator' });
-    this.OPTION2(() => {
-      this.CONSUME(Slash, { LABEL: 'slash' });
-      this.CONSUME2(NumberLiteral, { LABEL: 'denominator' });
-    });
+    this.OR2([
+      {
+        ALT: () => {
+          this.CONSUME(NumberLiteral, { LABEL: 'numerator' });
+          this.OPTION2(() => {
+            this.CONSUME(Slash, { LABEL: 'slash' });
+            this.CONSUME2(NumberLiteral, { LABEL: 'denominator' });
+          });
+          this.OPTION3(() => this.SUBRULE(this.entryFactor, { LABEL: 'factor' }));
+        },
+      },
+      { ALT: () => this.SUBRULE2(this.entryFactor, { LABEL: 'factor' }) },
+    ]);
+  });
+
+  /** A name with an optional whole power (`t`, `t^2`), or `( expression )`, inside a bracket entry. */
+  entryFactor = this.RULE('entryFactor', () => {
+    this.OR([
+      {
+        ALT: () => {
+          this.CONSUME(Identifier, { LABEL: 'name' });
+          this.OPTION(() => {
+            this.CONSUME(WedgeOp, { LABEL: 'caret' });
+            this.CONSUME(NumberLiteral, { LABEL: 'exponent' });
+          });
+        },
+      },
+      {
+        ALT: () => {
+          this.CONSUME(LParen, { LABEL: 'open' });
+          this.SUBRULE(this.expression, { LABEL: 'inner' });
+          this.CONSUME(RParen, { LABEL: 'close' });
+        },
+      },
+    ]);
   });
 
   indexMap = this.RULE('indexMap', () => {

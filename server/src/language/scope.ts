@@ -3,7 +3,7 @@
  * on every keystroke; it reports unknown, duplicate, reserved and ambiguous
  * names, and records every reference so a hover on a use finds its declaration.
  */
-import type { Expr, NameRef, Program } from './ast.js';
+import { entryExpressions, type Expr, type NameRef, type Program } from './ast.js';
 import { BUILTIN_NAMES, BUILTINS, FIELD_NAMES } from './builtins.js';
 import { defaultBasisNames } from './conventions.js';
 import type { Problem, Span } from './types.js';
@@ -170,13 +170,17 @@ class Resolver {
       case 'dim':
         this.walk(e.operand);
         return;
-      case 'number':
       case 'matrix':
       case 'point':
       case 'indexmap':
+        entryExpressions(e).forEach((x) => this.walk(x));
+        return;
       case 'rows':
       case 'columns':
       case 'solutions':
+        this.walk(e.matrix);
+        return;
+      case 'number':
         return;
     }
   }

@@ -1,5 +1,5 @@
 /** Visiting every expression of a statement, outermost first. */
-import type { Expr, Statement } from '../ast.js';
+import { entryExpressions, type Expr, type Statement } from '../ast.js';
 
 /** The expressions a statement contains directly (its value, or a claim's two sides). */
 export function statementExpressions(s: Statement): Expr[] {
@@ -41,13 +41,15 @@ export function forEachExpr(e: Expr, visit: (e: Expr) => void): void {
     case 'rows':
     case 'columns':
     case 'solutions':
-      visit(e.matrix);
+      forEachExpr(e.matrix, visit);
       return;
-    case 'number':
-    case 'name':
     case 'matrix':
     case 'point':
     case 'indexmap':
+      entryExpressions(e).forEach((x) => forEachExpr(x, visit));
+      return;
+    case 'number':
+    case 'name':
       return;
   }
 }
