@@ -31,7 +31,7 @@ export interface Program {
 export interface DroppedStatement {
   span: Span;
   keyword: Span;
-  kind: 'field' | 'normalize' | 'space' | 'vector' | 'subspace' | 'multivector' | 'claim' | 'show' | 'convention' | 'map' | 'flag';
+  kind: 'field' | 'normalize' | 'space' | 'vector' | 'subspace' | 'multivector' | 'claim' | 'show' | 'convention' | 'map' | 'flag' | 'parameter' | 'grassmannian' | 'class';
   /** The name the statement would have declared (space and vector/subspace/multivector declarations), if it was read. */
   declares?: Ident;
 }
@@ -45,7 +45,16 @@ export type Statement =
   | ShowStmt
   | ConventionStmt
   | MapStmt
-  | FlagStmt;
+  | FlagStmt
+  | ParameterStmt;
+
+/** `parameter t` or `parameter s, t`: indeterminates; entries using them are polynomials or rational functions. */
+export interface ParameterStmt {
+  type: 'parameter';
+  span: Span;
+  keyword: Span;
+  names: Ident[];
+}
 
 /** One `key value` pair of a convention statement; hyphenated values are joined (`direction-moment`). */
 export interface ConventionSetting {
@@ -112,12 +121,15 @@ export interface SpaceStmt {
   basis?: Ident[];
 }
 
-/** `vector p = …`, `subspace L = …`, `multivector eta = …`, each with an optional `in V`. */
+/**
+ * `vector p = …`, `subspace L = …`, `multivector eta = …`, each with an optional `in V`; also
+ * `grassmannian X = Gr(2, 4)` and `class c = sigma(X, 1)^4` (Schubert calculus).
+ */
 export interface DeclStmt {
   type: 'decl';
   span: Span;
   keyword: Span;
-  declKind: 'vector' | 'subspace' | 'multivector';
+  declKind: 'vector' | 'subspace' | 'multivector' | 'grassmannian' | 'class';
   name: Ident;
   value: Expr;
   inSpace?: Ident;

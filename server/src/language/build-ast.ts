@@ -15,7 +15,7 @@
  * position (which the parser's settings rule out, but a defensive builder does
  * not rely on that), makes it drop the statement instead of throwing.
  */
-import type { CstElement, CstNode, IToken } from 'chevrotain';
+import type { CstElement, CstNode, IToken, TokenType } from 'chevrotain';
 import type {
   Binary, DeclStmt, Entry, Expr, Ident, IndexKey, IndexMapLit, MatrixLit, PointLit, Relation, Statement,
 } from './ast.js';
@@ -176,8 +176,14 @@ class StatementBuilder {
       case 'declStmt': {
         const keyword = token(inner, 'keyword');
         const inSpace = optionalToken(inner, 'inSpace');
-        const declKind: DeclStmt['declKind'] =
-          keyword.tokenType === T.Vector ? 'vector' : keyword.tokenType === T.Subspace ? 'subspace' : 'multivector';
+        const kinds = new Map<TokenType, DeclStmt['declKind']>([
+          [T.Vector, 'vector'],
+          [T.Subspace, 'subspace'],
+          [T.Multivector, 'multivector'],
+          [T.GrassmannianKeyword, 'grassmannian'],
+          [T.ClassKeyword, 'class'],
+        ]);
+        const declKind = kinds.get(keyword.tokenType) ?? 'multivector';
         return {
           type: 'decl',
           span: extent,
@@ -234,6 +240,13 @@ class StatementBuilder {
           ...(inSpace ? { inSpace: ident(inSpace) } : {}),
         };
       }
+      case 'parameterStmt':
+        return {
+          type: 'parameter',
+          span: extent,
+          keyword: tokenSpan(token(inner, 'keyword')),
+          names: tokens(inner, 'name').map(ident),
+        };
       case 'showStmt':
         return {
           type: 'show',

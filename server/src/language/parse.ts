@@ -54,6 +54,9 @@ const KIND_BY_KEYWORD: Record<string, DroppedStatement['kind']> = {
   convention: 'convention',
   map: 'map',
   flag: 'flag',
+  parameter: 'parameter',
+  grassmannian: 'grassmannian',
+  class: 'class',
 };
 
 function isRealToken(token: IToken | undefined): token is IToken {
@@ -161,7 +164,7 @@ class ProgramReader {
     const nameToken = piece[1];
     const declares: Ident | undefined =
       resolvedKind !== 'field' && resolvedKind !== 'normalize' && resolvedKind !== 'claim' && resolvedKind !== 'show' &&
-      resolvedKind !== 'convention' &&
+      resolvedKind !== 'convention' && resolvedKind !== 'parameter' &&
       nameToken?.tokenType === T.Identifier
         ? { span: tokenSpan(nameToken), name: nameToken.image }
         : undefined;

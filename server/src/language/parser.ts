@@ -17,7 +17,7 @@ import {
   ALL_TOKENS, Arrow, Basis, Claim, Columns, Convention, Flag, Is, MapKeyword, Colon, Comma, Decomposable, Dim, Dot, ElementOf, Equals, Field, Identifier,
   In, Intersect, LBrace, LBracket, LParen, Minus, Multivector, Normalize, Not, NotElementOf, NotEquals,
   NumberLiteral, Plus, RBrace, RBracket, RParen, Rows, Semicolon, Show, Slash, Solutions, Space, Star,
-  Subspace, Vector, WedgeOp,
+  Subspace, Vector, WedgeOp, Parameter, GrassmannianKeyword, ClassKeyword,
 } from './tokens.js';
 import { createErrorMessageProvider, type MessageContext } from './syntax-messages.js';
 
@@ -112,6 +112,7 @@ export class StatementParser extends CstParser {
       { ALT: () => this.SUBRULE(this.conventionStmt) },
       { ALT: () => this.SUBRULE(this.mapStmt) },
       { ALT: () => this.SUBRULE(this.flagStmt) },
+      { ALT: () => this.SUBRULE(this.parameterStmt) },
     ]);
   });
 
@@ -166,6 +167,16 @@ export class StatementParser extends CstParser {
     });
   });
 
+  /** `parameter t` or `parameter s, t`: names for indeterminates the entries may use. */
+  parameterStmt = this.RULE('parameterStmt', () => {
+    this.CONSUME(Parameter, { LABEL: 'keyword' });
+    this.CONSUME(Identifier, { LABEL: 'name' });
+    this.MANY(() => {
+      this.CONSUME(Comma);
+      this.CONSUME2(Identifier, { LABEL: 'name' });
+    });
+  });
+
   /** `field QQ`, `field GF(7)`, `field GF(9) generator w` (the name of a generator of GF(q) over GF(p)). */
   fieldStmt = this.RULE('fieldStmt', () => {
     this.CONSUME(Field, { LABEL: 'keyword' });
@@ -206,6 +217,8 @@ export class StatementParser extends CstParser {
       { ALT: () => this.CONSUME(Vector, { LABEL: 'keyword' }) },
       { ALT: () => this.CONSUME(Subspace, { LABEL: 'keyword' }) },
       { ALT: () => this.CONSUME(Multivector, { LABEL: 'keyword' }) },
+      { ALT: () => this.CONSUME(GrassmannianKeyword, { LABEL: 'keyword' }) },
+      { ALT: () => this.CONSUME(ClassKeyword, { LABEL: 'keyword' }) },
     ]);
     this.CONSUME(Identifier, { LABEL: 'name' });
     this.CONSUME(Equals);

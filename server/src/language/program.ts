@@ -156,6 +156,7 @@ class ProgramEvaluator {
   private statement(s: Program['statements'][number]): void {
     switch (s.type) {
       case 'field':
+      case 'parameter':
       case 'normalize':
       case 'convention':
         return;

@@ -8,7 +8,7 @@ import { BUILTIN_NAMES, BUILTINS, FIELD_NAMES } from './builtins.js';
 import { defaultBasisNames } from './conventions.js';
 import type { Problem, Span } from './types.js';
 
-export type SymbolKind = 'space' | 'basis' | 'vector' | 'subspace' | 'multivector' | 'map' | 'flag' | 'scalar';
+export type SymbolKind = 'space' | 'basis' | 'vector' | 'subspace' | 'multivector' | 'map' | 'flag' | 'grassmannian' | 'class' | 'scalar';
 
 export interface SymbolInfo {
   name: string;
@@ -193,6 +193,9 @@ export function resolveNames(program: Program, firstLabel: 0 | 1 = 1): Resolutio
     switch (s.type) {
       case 'field':
         if (s.generator) r.declare({ name: s.generator.name, kind: 'scalar', nameSpan: s.generator.span, declSpan: s.span });
+        break;
+      case 'parameter':
+        for (const name of s.names) r.declare({ name: name.name, kind: 'scalar', nameSpan: name.span, declSpan: s.span });
         break;
       case 'normalize':
       case 'convention':

@@ -246,7 +246,7 @@ function editDistance(a: string, b: string): number {
   return row[b.length]!;
 }
 
-const STATEMENT_WORDS = ['field', 'normalize', 'space', 'vector', 'subspace', 'multivector', 'claim', 'show', 'convention', 'map', 'flag'];
+const STATEMENT_WORDS = ['field', 'normalize', 'space', 'vector', 'subspace', 'multivector', 'claim', 'show', 'convention', 'map', 'flag', 'parameter', 'grassmannian', 'class'];
 
 /**
  * The statement keyword a word was probably meant to be (`Vector`, `vectr`,

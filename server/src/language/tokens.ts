@@ -80,6 +80,9 @@ export const Show = keyword('show', [StatementKeyword]);
 export const Convention = keyword('convention', [StatementKeyword]);
 export const MapKeyword = createToken({ name: 'Map', pattern: 'map', longer_alt: Identifier, categories: [StatementKeyword] });
 export const Flag = keyword('flag', [StatementKeyword]);
+export const Parameter = keyword('parameter', [StatementKeyword]);
+export const GrassmannianKeyword = createToken({ name: 'GrassmannianKeyword', pattern: 'grassmannian', longer_alt: Identifier, categories: [StatementKeyword] });
+export const ClassKeyword = createToken({ name: 'ClassKeyword', pattern: 'class', longer_alt: Identifier, categories: [StatementKeyword] });
 export const Dim = keyword('dim');
 export const Basis = keyword('basis');
 export const In = keyword('in');
@@ -117,11 +120,13 @@ export const Dot = createToken({ name: 'Dot', pattern: '.' });
 
 export const KEYWORDS: readonly TokenType[] = [
   Field, Normalize, Space, Vector, Subspace, Multivector, Claim, Show, Convention, MapKeyword, Flag,
+  Parameter, GrassmannianKeyword, ClassKeyword,
   Dim, Basis, In, Not, Decomposable, Rows, Solutions, Columns, Is,
 ];
 
 export const STATEMENT_KEYWORDS: readonly TokenType[] = [
   Field, Normalize, Space, Vector, Subspace, Multivector, Claim, Show, Convention, MapKeyword, Flag,
+  Parameter, GrassmannianKeyword, ClassKeyword,
 ];
 
 /** Lexer order matters only where one pattern is a prefix of another: keywords before identifiers. */

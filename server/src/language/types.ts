@@ -119,6 +119,8 @@ export type ResultKind =
   | 'scalar'
   | 'map'
   | 'flag'
+  | 'grassmannian'
+  | 'class'
   | 'claim'
   | 'show';
 
@@ -200,7 +202,7 @@ export interface SyntaxFacts {
 export interface NameUse {
   span: Span;
   name: string;
-  kind: 'space' | 'basis' | 'vector' | 'subspace' | 'multivector' | 'map' | 'flag' | 'scalar';
+  kind: 'space' | 'basis' | 'vector' | 'subspace' | 'multivector' | 'map' | 'flag' | 'grassmannian' | 'class' | 'scalar';
   /** For a basis vector: the space it belongs to. */
   space?: string;
 }

@@ -113,6 +113,8 @@ const COMPLETION_KINDS: Record<CompletionKind, CompletionItemKind> = {
   subspace: CompletionItemKind.Variable,
   multivector: CompletionItemKind.Variable,
   flag: CompletionItemKind.Variable,
+  grassmannian: CompletionItemKind.Module,
+  class: CompletionItemKind.Variable,
   map: CompletionItemKind.Function,
   builtin: CompletionItemKind.Function,
   scalar: CompletionItemKind.Constant,
@@ -130,6 +132,9 @@ const OUTLINE_KINDS: Record<OutlineKind, SymbolKind> = {
   multivector: SymbolKind.Array,
   map: SymbolKind.Function,
   flag: SymbolKind.Struct,
+  grassmannian: SymbolKind.Namespace,
+  class: SymbolKind.Variable,
+  parameter: SymbolKind.TypeParameter,
   claim: SymbolKind.Boolean,
   show: SymbolKind.Event,
 };

@@ -10,7 +10,7 @@ import { analyze, completionsAt, type Completion } from '../../../server/src/lan
 import { CONVENTION_SETTINGS, NORMALIZATION_MODES, PROPERTIES } from '../../../server/src/language/services/words.js';
 import { analyzeMarked, textOf } from './marked-source.js';
 
-const STATEMENT_KEYWORDS = ['field', 'normalize', 'space', 'vector', 'subspace', 'multivector', 'claim', 'show', 'convention', 'map', 'flag'];
+const STATEMENT_KEYWORDS = ['field', 'normalize', 'space', 'vector', 'subspace', 'multivector', 'claim', 'show', 'convention', 'map', 'flag', 'parameter', 'grassmannian', 'class'];
 
 function complete(source: string, afterSpace = false): { items: Completion[]; text: string } {
   const { text, cursor, analysis } = analyzeMarked(source);

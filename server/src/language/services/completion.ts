@@ -36,6 +36,8 @@ export type CompletionKind =
   | 'multivector'
   | 'map'
   | 'flag'
+  | 'grassmannian'
+  | 'class'
   | 'scalar'
   | 'builtin'
   | 'setting'
@@ -201,7 +203,8 @@ function namesInScope(facts: SyntaxFacts, statementStart: number, replace: Span)
 }
 
 function kindOfDropped(kind: string): CompletionKind {
-  return kind === 'space' || kind === 'vector' || kind === 'subspace' || kind === 'multivector' || kind === 'map' || kind === 'flag'
+  return kind === 'space' || kind === 'vector' || kind === 'subspace' || kind === 'multivector' || kind === 'map' || kind === 'flag' ||
+    kind === 'grassmannian' || kind === 'class'
     ? kind
     : 'vector';
 }

@@ -13,7 +13,7 @@
 import type { Statement } from '../ast.js';
 import type { Analysis, Span } from '../types.js';
 
-export type OutlineKind = 'space' | 'basis' | 'vector' | 'subspace' | 'multivector' | 'map' | 'flag' | 'claim' | 'show';
+export type OutlineKind = 'space' | 'basis' | 'vector' | 'subspace' | 'multivector' | 'map' | 'flag' | 'grassmannian' | 'class' | 'parameter' | 'claim' | 'show';
 
 export interface OutlineEntry {
   name: string;
@@ -67,6 +67,9 @@ function entryOf(text: string, s: Statement): OutlineEntry | undefined {
       return entry(statementWords(text, s), 'claim', 'claim', s.keyword);
     case 'show':
       return entry(statementWords(text, s), 'show', 'show', s.keyword);
+    case 'parameter':
+      // One statement may name several parameters; the outline lists the first, the detail all of them.
+      return entry(s.names[0]!.name, 'parameter', `parameter${s.names.length > 1 ? `s ${s.names.map((n) => n.name).join(', ')}` : ''}`, s.names[0]!.span);
     case 'field':
     case 'normalize':
     case 'convention':
@@ -74,7 +77,7 @@ function entryOf(text: string, s: Statement): OutlineEntry | undefined {
   }
 }
 
-const DECLARING: ReadonlySet<string> = new Set(['space', 'vector', 'subspace', 'multivector', 'map', 'flag']);
+const DECLARING: ReadonlySet<string> = new Set(['space', 'vector', 'subspace', 'multivector', 'map', 'flag', 'grassmannian', 'class', 'parameter']);
 
 export function documentSymbols(analysis: Analysis): OutlineEntry[] {
   const facts = analysis.syntax;

@@ -63,6 +63,9 @@ function classify(kind: SymbolKind): { type: SemanticTokenType; modifiers: Seman
     case 'multivector':
     case 'flag':
       return { type: 'variable', modifiers: [kind] };
+    case 'grassmannian':
+    case 'class':
+      return { type: 'variable', modifiers: [] };
   }
 }
 

@@ -71,7 +71,12 @@ export function describeSymbol(facts: SyntaxFacts, symbol: SymbolInfo): string {
     case 'map':
       return statement?.type === 'map' ? `map ${statement.from.name} → ${statement.to.name}` : 'map';
     case 'scalar':
+      if (statement?.type === 'parameter') return 'parameter';
       return statement?.type === 'field' ? `generator of ${statement.name.name}(${statement.modulus?.text ?? ''})` : 'scalar';
+    case 'grassmannian':
+      return 'Grassmannian';
+    case 'class':
+      return 'Schubert class';
     case 'vector':
     case 'subspace':
     case 'multivector':

@@ -12,6 +12,7 @@ export function statementExpressions(s: Statement): Expr[] {
     case 'claim':
       return s.relation.other ? [s.subject, s.relation.other] : [s.subject];
     case 'field':
+    case 'parameter':
     case 'normalize':
     case 'space':
     case 'convention':

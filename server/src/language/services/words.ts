@@ -26,6 +26,9 @@ export const STATEMENT_KEYWORD_DETAILS: Readonly<Record<string, string>> = {
   convention: 'the file\'s conventions: convention order colex labels 0',
   map: 'a linear map by its matrix: map f : V -> U = [ … ]',
   flag: 'a flag: flag E = standard(V), or by n independent vectors',
+  parameter: 'parameters the entries may use: parameter t, or parameter s, t',
+  grassmannian: 'a Grassmannian for Schubert calculus: grassmannian X = Gr(2, 4)',
+  class: 'a Schubert class: class c = sigma(X, 1)^4',
 };
 
 /** Keywords inside statements, with what they introduce. */
