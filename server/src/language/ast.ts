@@ -219,12 +219,21 @@ export interface Unary {
   operand: Expr;
 }
 
-/** A call of a built-in: `span(p, q)`, `plucker(L)`, `chart(L, 13)`. */
+/** A call of a built-in: `span(p, q)`, `plucker(L)`, `chart(L, 13)`; `at(W, t = 2)` gives values to parameters. */
 export interface Call {
   type: 'call';
   span: Span;
   callee: Ident;
   args: Expr[];
+  /** `t = 2`: values given to parameters, after the other arguments. */
+  named?: NamedArgument[];
+}
+
+/** `t = 2` in a call. */
+export interface NamedArgument {
+  span: Span;
+  name: Ident;
+  value: Expr;
 }
 
 /** A parenthesised list of at least two items; `(x)` is just `x`. */

@@ -17,7 +17,7 @@
  */
 import type { CstElement, CstNode, IToken, TokenType } from 'chevrotain';
 import type {
-  Binary, DeclStmt, Entry, Expr, Ident, IndexKey, IndexMapLit, MatrixLit, PointLit, Relation, Statement,
+  Binary, DeclStmt, Entry, Expr, Ident, IndexKey, IndexMapLit, MatrixLit, NamedArgument, PointLit, Relation, Statement,
 } from './ast.js';
 import type { Problem, Span } from './types.js';
 import * as T from './tokens.js';
@@ -411,9 +411,17 @@ class StatementBuilder {
     const nameToken = token(node, 'name');
     if (optionalToken(node, 'open')) {
       const close = token(node, 'close');
-      const args = nodes(node, 'arg').map((n) => this.expression(n).node);
+      const args: Expr[] = [];
+      const named: NamedArgument[] = [];
+      for (const arg of nodes(node, 'arg')) {
+        const value = this.expression(child(arg, 'value')).node;
+        const name = optionalToken(arg, 'name');
+        if (name) named.push({ span: join(tokenSpan(name), value.span), name: ident(name), value });
+        else if (named.length > 0) this.reject('syntax/unexpected-token', value.span, `values given to parameters (t = 2) come after the other arguments of ${nameToken.image}`);
+        else args.push(value);
+      }
       const span = join(tokenSpan(nameToken), tokenSpan(close));
-      return { node: { type: 'call', span, callee: ident(nameToken), args }, extent: span };
+      return { node: { type: 'call', span, callee: ident(nameToken), args, ...(named.length > 0 ? { named } : {}) }, extent: span };
     }
     if (optionalToken(node, 'dot')) {
       const member = token(node, 'member');

@@ -388,10 +388,10 @@ export class StatementParser extends CstParser {
           ALT: () => {
             this.CONSUME(LParen, { LABEL: 'open' });
             this.OPTION2(() => {
-              this.SUBRULE(this.expression, { LABEL: 'arg' });
+              this.SUBRULE(this.argument, { LABEL: 'arg' });
               this.MANY(() => {
                 this.CONSUME(Comma);
-                this.SUBRULE2(this.expression, { LABEL: 'arg' });
+                this.SUBRULE2(this.argument, { LABEL: 'arg' });
               });
             });
             this.CONSUME(RParen, { LABEL: 'close' });
@@ -405,6 +405,21 @@ export class StatementParser extends CstParser {
         },
       ]);
     });
+  });
+
+  /** An argument of a call: an expression, or a value given to a parameter, `t = 2` (as in `at(W, t = 2)`). */
+  argument = this.RULE('argument', () => {
+    this.OR([
+      {
+        GATE: () => this.LA(1).tokenType === Identifier && this.LA(2).tokenType === Equals,
+        ALT: () => {
+          this.CONSUME(Identifier, { LABEL: 'name' });
+          this.CONSUME(Equals, { LABEL: 'equals' });
+          this.SUBRULE(this.expression, { LABEL: 'value' });
+        },
+      },
+      { ALT: () => this.SUBRULE2(this.expression, { LABEL: 'value' }) },
+    ]);
   });
 
   /** `(x)` or a tuple `(x, y, …)`. */

@@ -163,6 +163,11 @@ class Resolver {
         }
         // chart(W, 13): the index set is a literal, not a name, so walking it is harmless.
         e.args.forEach((a) => this.walk(a));
+        // at(W, t = 2): t names a parameter, a use of it like any other.
+        e.named?.forEach((a) => {
+          this.referToName({ type: 'name', span: a.name.span, name: a.name });
+          this.walk(a.value);
+        });
         return;
       case 'tuple':
         e.items.forEach((a) => this.walk(a));

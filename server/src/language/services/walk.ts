@@ -32,6 +32,7 @@ export function forEachExpr(e: Expr, visit: (e: Expr) => void): void {
       return;
     case 'call':
       e.args.forEach((a) => forEachExpr(a, visit));
+      e.named?.forEach((a) => forEachExpr(a.value, visit));
       return;
     case 'tuple':
       e.items.forEach((a) => forEachExpr(a, visit));
