@@ -34,6 +34,12 @@ export const BUILTINS: readonly Builtin[] = [
   { name: 'distance', signature: 'distance(U, W)', summary: 'the subspace distance dim U + dim W − 2 dim(U ∩ W)' },
   { name: 'min_distance', signature: 'min_distance(U1, U2, …)', summary: 'the minimum subspace distance of a code, with the pair reaching it' },
   { name: 'schubert', signature: 'schubert(W) or schubert(W, F)', summary: 'the Schubert cell of W relative to a flag (standard by default)' },
+  { name: 'Gr', signature: 'Gr(k, n) or Gr(k, V)', summary: 'the Grassmannian G(k, n), for Schubert calculus' },
+  { name: 'sigma', signature: 'sigma(X, λ1, λ2, …)', summary: 'the Schubert class σ_λ of the Grassmannian X (λ in the k×(n−k) box; sigma(X) is 1)' },
+  { name: 'degree', signature: 'degree(X)', summary: 'the degree of the Grassmannian X in its Plücker embedding' },
+  { name: 'intersection_number', signature: 'intersection_number(c)', summary: 'the coefficient of the point class in a Schubert class: the intersection number of a top-degree product' },
+  { name: 'dual', signature: 'dual(c)', summary: 'the dual class: σ_λ ↦ σ_λ∨, the complement of λ in the box turned around' },
+  { name: 'transversals', signature: 'transversals(L1, L2, L3, L4)', summary: 'the lines of projective 3-space meeting four given lines' },
 ];
 
 export const BUILTIN_NAMES: ReadonlySet<string> = new Set(BUILTINS.map((b) => b.name));

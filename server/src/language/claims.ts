@@ -19,6 +19,8 @@ import { matrixLatex } from './latex.js';
 import { formatCombination, formatMatrixInline, formatMultivector, formatPoint, formatTuple } from './text.js';
 import type { TextEdit } from './types.js';
 import { describeValue, type Scalar, type SubspaceValue, type Value } from './values.js';
+import { formatClass } from '../engine/schubert-calculus.js';
+import { classesEqual } from './schubert-calculus.js';
 
 export interface ClaimOutcome {
   holds: boolean;
@@ -51,7 +53,7 @@ export function checkClaim(env: Environment, source: string, s: ClaimStmt): Clai
   // A count is compared with a whole number as written, not with its image in
   // the field: over GF(2), `dim A = 3` must not read 3 as 1.
   const other: Value =
-    (subject.t === 'integer' || subject.t === 'count') && otherExpr.type === 'number' && /^\d+$/.test(otherExpr.text)
+    (subject.t === 'integer' || subject.t === 'count' || subject.t === 'transversals') && otherExpr.type === 'number' && /^\d+$/.test(otherExpr.text)
       ? { t: 'count', value: BigInt(otherExpr.text), what: 'a number' }
       : evaluate(env, otherExpr, {});
   const otherText = source.slice(s.relation.other!.span.start, s.relation.other!.span.end).replace(/\s+/g, ' ');
@@ -167,6 +169,31 @@ function equalityClaim(
     // Only a false `=` has a value to correct: a false `!=` means the two sides are equal.
     ...(wanted && !equal && replacement ? { replacement } : {}),
   });
+
+  // Schubert classes: equal when every coefficient is.
+  if (subject.t === 'class' || other.t === 'class') {
+    if (subject.t !== 'class' || other.t !== 'class') {
+      fail('type/operand', s.relation.span, `cannot compare ${describeValue(subject)} with ${describeValue(other)}`);
+    }
+    const equal = classesEqual(subject.cls, other.cls);
+    const found = equal
+      ? `${subjectText} = ${formatClass(subject.cls)}`
+      : `${subjectText} is ${formatClass(subject.cls)}, not ${formatClass(other.cls)}${subject.cls.k !== other.cls.k || subject.cls.n !== other.cls.n ? ` (G(${subject.cls.k},${subject.cls.n}) against G(${other.cls.k},${other.cls.n}))` : ''}`;
+    return verdict(equal, found, formatClass(subject.cls, 'latex'), 'claim/class');
+  }
+
+  // The transversals of four lines against a number: the lines defined over the file's field.
+  if (subject.t === 'transversals' && other.t === 'count') {
+    const r = subject.result;
+    const n = r.kind === 'finite' ? BigInt(r.transversals.length) : undefined;
+    const found =
+      n === undefined
+        ? `${subjectText} is not a finite set: ${r.summary}`
+        : n === other.value
+          ? `${subjectText}: ${n} line${n === 1n ? '' : 's'} over ${F.name}`
+          : `${subjectText} has ${n} line${n === 1n ? '' : 's'} over ${F.name}, not ${other.value}: ${r.summary}`;
+    return verdict(n === other.value, found, '', 'claim/transversals');
+  }
 
   // A count against a number: dim L = 2.
   const whole = (v: Value): bigint | undefined => (v.t === 'integer' ? BigInt(v.value) : v.t === 'count' ? v.value : undefined);

@@ -3,6 +3,7 @@
  * failure is a `Failure` carrying a problem with the span of the offending
  * sub-expression, or `Poisoned` when an earlier failure already explains it.
  */
+import { callSchubertCalculus, classArithmetic } from './schubert-calculus.js';
 import { DivisionByZeroError } from '../engine/field.js';
 import { findDependency, intersectRowSpaces, kernel, rref, sumRowSpaces } from '../engine/matrix.js';
 import {
@@ -169,6 +170,8 @@ function negate(env: Environment, v: Value, span: Span): Value {
 function binary(env: Environment, e: Binary, ctx: ExprContext): Value {
   const left = evaluate(env, e.left, ctx);
   const right = evaluate(env, e.right, ctx);
+  const classes = classArithmetic(e, left, right);
+  if (classes) return classes;
   switch (e.op) {
     case '+':
     case '-':
@@ -578,7 +581,7 @@ function call(env: Environment, e: Call, ctx: ExprContext): Value {
     }
     default: {
       const evaluateArg = (arg: Expr) => evaluate(env, arg, ctx);
-      const builtinValue = callGeometry(env, e, evaluateArg) ?? callCombinatorics(env, e, evaluateArg);
+      const builtinValue = callGeometry(env, e, evaluateArg) ?? callCombinatorics(env, e, evaluateArg) ?? callSchubertCalculus(env, e, evaluateArg);
       if (builtinValue) return builtinValue;
       const bound = env.bindings.get(e.callee.name);
       if (bound) {

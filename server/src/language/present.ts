@@ -4,6 +4,7 @@
  * coordinates also carries the convention it was computed in: index order,
  * labels and layout come from the file's convention (see `coordinates.ts`).
  */
+import { presentClass, presentGrassmannian, presentTransversals } from './present-schubert-calculus.js';
 import { toDense, sortedTerms } from '../engine/multivector.js';
 import { binomialBig } from '../engine/subsets.js';
 import { grassmannianDimension } from '../engine/grassmannian.js';
@@ -316,6 +317,12 @@ function abbreviate(names: readonly string[]): string {
 /** Any value, for declarations and `show` lines. */
 export function presentValue(env: Environment, v: Value): Presented {
   switch (v.t) {
+    case 'grassmannian':
+      return presentGrassmannian(v);
+    case 'class':
+      return presentClass(v);
+    case 'transversals':
+      return presentTransversals(env, v);
     case 'subspace':
       return presentSubspaceWithPlucker(env, v);
     case 'vector':

@@ -340,6 +340,12 @@ function coerce(env: Environment, value: Value, s: DeclStmt): Value {
         fail('type/declared-kind', s.value.span, `${s.name.name} is declared a multivector but the value is ${describeValue(value)}; plucker(…) gives its Plücker vector`);
       }
       break;
+    case 'grassmannian':
+      if (value.t === 'grassmannian') return value;
+      break;
+    case 'class':
+      if (value.t === 'class') return value;
+      break;
   }
   fail('type/declared-kind', s.value.span, `${s.name.name} is declared a ${s.declKind} but the value is ${describeValue(value)}`);
 }

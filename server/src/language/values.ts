@@ -3,6 +3,8 @@
  * file talks about. Scalars are opaque elements of the file's field.
  */
 import type { Multivector } from '../engine/multivector.js';
+import type { SchubertClass } from '../engine/schubert-calculus.js';
+import type { FourLineTransversals } from '../engine/four-line-transversals.js';
 import type { Decomposition } from '../engine/decompose.js';
 import type { Span } from './types.js';
 
@@ -209,8 +211,31 @@ export interface SubspaceListValue {
   bases: Scalar[][][];
 }
 
+/** A Grassmannian G(k, n) for Schubert calculus (`Gr(2, 4)`). */
+export interface GrassmannianValue {
+  t: 'grassmannian';
+  k: number;
+  n: number;
+}
+
+/** An integer combination of Schubert classes of one Grassmannian. */
+export interface ClassValue {
+  t: 'class';
+  cls: SchubertClass;
+}
+
+/** The lines of projective 3-space meeting four given lines. */
+export interface TransversalsValue {
+  t: 'transversals';
+  lines: SubspaceValue[];
+  result: FourLineTransversals<Scalar>;
+}
+
 export type Value =
   | ScalarValue
+  | GrassmannianValue
+  | ClassValue
+  | TransversalsValue
   | IntegerValue
   | VectorValue
   | SubspaceValue
@@ -239,6 +264,12 @@ export function describeValue(v: Value): string {
       return 'a scalar';
     case 'integer':
       return 'a whole number';
+    case 'grassmannian':
+      return `the Grassmannian G(${v.k},${v.n})`;
+    case 'class':
+      return `a Schubert class of G(${v.cls.k},${v.cls.n})`;
+    case 'transversals':
+      return 'the transversals of four lines';
     case 'vector':
       return `a vector in ${v.space.name}`;
     case 'subspace':
