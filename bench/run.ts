@@ -2,7 +2,7 @@
  * `npm run bench`: the performance tables of docs/performance.md, measured in
  * one run on this machine, with the targets checked at the end.
  *
- *   node --expose-gc --import tsx bench/run.ts [--quick] [--only=plucker,decompose,server] [--out=FILE]
+ *   node --expose-gc --import tsx bench/run.ts [--quick] [--only=plucker,decompose,file,server] [--out=FILE]
  *
  * --quick makes fewer and shorter rounds (about a minute in all); the
  * full run takes a few minutes. The server part drives dist/server.cjs, so
@@ -15,6 +15,7 @@ import { decomposeTable, runDecomposeBenchmark } from './decompose.js';
 import { pluckerTable, runPluckerBenchmark } from './plucker.js';
 import { runServerBenchmark, serverTables } from './server.js';
 import { decomposeTargets, pluckerTargets, serverTargets, targetTable } from './targets.js';
+import { runWholeFileBenchmark, wholeFileTable } from './whole-file.js';
 
 const args = process.argv.slice(2);
 const quick = args.includes('--quick');
@@ -78,6 +79,12 @@ if (wanted('decompose')) {
   const results = runDecomposeBenchmark(quick ? { rounds: 1, budgetMs: 25 } : { rounds: 3, budgetMs: 100 }, log);
   emit(`## Decomposability (QQ, entries in [−9, 9])\n\n${decomposeTable(results)}`);
   targets.push(...decomposeTargets(results));
+}
+
+if (wanted('file')) {
+  log('Whole files against the engine');
+  const results = runWholeFileBenchmark(quick ? { rounds: 2, budgetMs: 100 } : { rounds: 5, budgetMs: 300 }, log);
+  emit(`## A whole file against the engine (QQ, entries in [−9, 9])\n\n${wholeFileTable(results)}`);
 }
 
 if (wanted('server')) {

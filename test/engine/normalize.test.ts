@@ -1,7 +1,7 @@
 import { test, describe } from 'node:test';
 import assert from 'node:assert/strict';
 import fc from 'fast-check';
-import { normalizePoint, projectivelyEqual } from '../../server/src/engine/normalize.js';
+import { normalizedCoordinate, normalizePoint, pointScaling, projectivelyEqual } from '../../server/src/engine/normalize.js';
 import { primeField } from '../../server/src/engine/prime-field.js';
 import { QQ, gcdBigInt, rational } from '../../server/src/engine/rational.js';
 import { EXTERIOR_CASES, QQ_EXTERIOR, scaleVector } from './exterior-arbitraries.js';
@@ -55,6 +55,37 @@ describe('normalizing projective points', () => {
     const out = normalizePoint(F, [0, 3, 5].map((x) => F.fromBigInt(BigInt(x))), 'primitive');
     assert.equal(out.mode, 'first-one');
     assert.deepEqual(out.values.map((x) => F.format(x)), ['0', '1', '4']);
+  });
+
+  test('the scaling alone, applied one coordinate at a time, gives the normalized vector, in every mode and field (fast-check)', () => {
+    // The displayed point normalizes only the coordinates it shows; it must show what normalizePoint gives.
+    for (const c of EXTERIOR_CASES) {
+      const { F } = c;
+      fc.assert(
+        fc.property(
+          fc.array(c.element, { minLength: 0, maxLength: 8 }),
+          fc.constantFrom('raw', 'first-one', 'primitive', 'positive' as const),
+          (v, mode) => {
+            const whole = normalizePoint(F, v, mode);
+            const scaling = pointScaling(F, v, mode);
+            assert.equal(scaling.mode, whole.mode);
+            assert.deepStrictEqual(scaling.scale, whole.scale);
+            assert.deepStrictEqual(v.map((x) => normalizedCoordinate(F, scaling, x)), whole.values);
+          },
+        ),
+        { numRuns: 60 },
+      );
+    }
+  });
+
+  test("'primitive' divides integer coordinates by their gcd, here 6 after a coprime start (by hand)", () => {
+    // The gcd of (12, −18, 30, 42) is 6; the first entry is positive, so the scale is 1/6.
+    const out = normalizePoint(QQ, [r(0), r(12), r(-18), r(30), r(42)], 'primitive');
+    assert.deepEqual(out.values.map(QQ.format), ['0', '2', '-3', '5', '7']);
+    assert.equal(QQ.format(out.scale), '1/6');
+    // A coprime pair early on makes the gcd 1, whatever follows.
+    const coprime = normalizePoint(QQ, [r(-4), r(6), r(9), r(12)], 'primitive');
+    assert.deepEqual(coprime.values.map(QQ.format), ['4', '-6', '-9', '-12']);
   });
 
   test('the zero vector is left alone', () => {

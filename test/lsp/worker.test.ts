@@ -24,11 +24,13 @@ import { assertBundleIsFresh } from '../support/bundles.js';
 import { startServerSession, type LoggedNotification, type ServerSession } from './server-process.js';
 
 /**
- * A k×n matrix of small integers from a fixed linear congruential sequence (the constants of the
- * classic C library `rand` example, from memory). Such a matrix has full rank for all but a vanishing
- * share of choices (common practice, no source), and its C(n,k) maximal minors are all computed for
- * its Plücker vector: C(20,10) = 184756 of them (OEIS A000984, central binomial coefficients), each a
- * 10×10 determinant. That takes a second or more here.
+ * A k×n matrix of integers of 18 decimal digits from a fixed linear congruential sequence (the
+ * constants of the classic C library `rand` example, from memory). Such a matrix has full rank for all
+ * but a vanishing share of choices (common practice, no source), and its C(n,k) maximal minors are all
+ * computed for its Plücker vector: C(20,10) = 184756 of them (OEIS A000984, central binomial
+ * coefficients), each a 10×10 determinant. Entries this long make every minor a large number, so that
+ * takes a second or more here: the tests below need the statement to outlast the progress delay and
+ * the time limit they set. (With one-digit entries the minors take a tenth of a second.)
  */
 function heavyRows(k: number, n: number, seed: number): string {
   let state = seed;
@@ -36,7 +38,13 @@ function heavyRows(k: number, n: number, seed: number): string {
     state = (state * 1103515245 + 12345) % 2147483648;
     return ((state >> 8) % 19) - 9;
   };
-  return Array.from({ length: k }, () => Array.from({ length: n }, next).join(' ')).join('; ');
+  const entry = () => {
+    // A leading digit that is never 0, and a sign.
+    let digits = String(next() || 1);
+    for (let d = 1; d < 18; d++) digits += String(Math.abs(next()) % 10);
+    return digits;
+  };
+  return Array.from({ length: k }, () => Array.from({ length: n }, entry).join(' ')).join('; ');
 }
 
 // Two coordinate vectors of a 4-dimensional space span a plane, so dim L = 3 is false (common

@@ -82,6 +82,8 @@ function hasOrder<T>(F: Field<T>): F is Field<T> & Pick<FiniteField, 'order'> {
 /** The number of elements of a finite field, or undefined for an infinite one (the rationals). */
 export function finiteFieldOrder<T>(F: Field<T>): bigint | undefined {
   if (hasOrder(F)) return F.order;
+  // A field of rational functions GF(p)(t) has characteristic p but infinitely many elements.
+  if ((F as { variables?: unknown }).variables !== undefined) return undefined;
   return F.characteristic > 0n ? F.characteristic : undefined;
 }
 

@@ -27,6 +27,7 @@ export * from './polynomial-mod-p.js';
 export * from './extension-field.js';
 export * from './finite-fields.js';
 export * from './subspace-codes.js';
+export * from './polynomials/index.js';
 export * from './partitions.js';
 export * from './littlewood-richardson.js';
 export * from './schubert-calculus.js';

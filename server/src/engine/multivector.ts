@@ -6,9 +6,15 @@
  * for Σ c_K · e_K with e_K = e_{K[0]} ∧ … ∧ e_{K[k−1]}. Zero coefficients are
  * never stored, so the zero multivector has no terms. Values are treated as
  * immutable: every operation returns a new multivector.
+ *
+ * A multivector made from all its coefficients (`fromDense`, which is how
+ * every Plücker vector is made) keeps them, and builds its map of terms only
+ * when something reads `terms`: at G(10,20) the map is 184,756 string keys,
+ * which cost several times the minors themselves, while most users of a
+ * Plücker vector want the coefficients in order (`toDense`) or a few of them.
  */
 import type { Field } from './field.js';
-import { binomial, checkSubset, compareLex, forEachSubset, mergeSorted, sortWithSign, subsetKey, wedgeSign } from './subsets.js';
+import { binomial, checkSubset, compareLex, forEachSubset, mergeSorted, rankLex, sortWithSign, subsetKey, wedgeSign } from './subsets.js';
 
 export interface MultivectorTerm<T> {
   /** Strictly increasing indices in [0, n). */
@@ -24,6 +30,30 @@ export interface Multivector<T> {
   k: number;
   /** Keyed by `subsetKey(subset)`. */
   terms: Map<string, MultivectorTerm<T>>;
+}
+
+/**
+ * The coefficients, in lexicographic order of subsets, of the multivectors made
+ * by `fromDense`, with every zero replaced by `F.zero` (as `toDense` of the map
+ * of terms would give them). Nothing changes a multivector after it is made,
+ * so the map of terms, once built, always agrees with these.
+ */
+const denseCoefficients = new WeakMap<object, { values: readonly unknown[]; nonzero: number }>();
+
+function keptCoefficients<T>(mv: Multivector<T>): readonly T[] | undefined {
+  return denseCoefficients.get(mv)?.values as readonly T[] | undefined;
+}
+
+/** The map of terms of the nonzero coefficients of a dense list (zeros already replaced by F.zero). */
+function termsOfDense<T>(F: Field<T>, n: number, k: number, values: readonly T[]): Map<string, MultivectorTerm<T>> {
+  const terms = new Map<string, MultivectorTerm<T>>();
+  if (k <= n) {
+    forEachSubset(n, k, (s, rank) => {
+      const c = values[rank]!;
+      if (!F.isZero(c)) terms.set(subsetKey(s), { subset: s.slice(), coeff: c });
+    });
+  }
+  return terms;
 }
 
 function checkShape(n: number, k: number, what: string): void {
@@ -171,6 +201,8 @@ export function wedgeVectors<T>(F: Field<T>, n: number, vectors: readonly (reado
 }
 
 export function isZeroMV<T>(mv: Multivector<T>): boolean {
+  const kept = denseCoefficients.get(mv);
+  if (kept !== undefined) return kept.nonzero === 0;
   return mv.terms.size === 0;
 }
 
@@ -185,6 +217,13 @@ export function coefficient<T>(F: Field<T>, mv: Multivector<T>, indices: readonl
   }
   const { sorted, sign } = sortWithSign(indices);
   if (sign === 0) return F.zero;
+  const kept = keptCoefficients(mv);
+  if (kept !== undefined) {
+    // An index outside [0, n) names no term, so its coefficient is zero, as the map of terms answers.
+    if (!sorted.every((x) => Number.isInteger(x) && x >= 0 && x < mv.n)) return F.zero;
+    const c = kept[rankLex(sorted, mv.n)]!;
+    return sign === 1 || F.isZero(c) ? c : F.neg(c);
+  }
   const t = mv.terms.get(subsetKey(sorted));
   if (t === undefined) return F.zero;
   return sign === 1 ? t.coeff : F.neg(t.coeff);
@@ -205,6 +244,8 @@ export function supportColumns<T>(mv: Multivector<T>): number[] {
 /** All C(n, k) coefficients in lexicographic order of the subsets. */
 export function toDense<T>(F: Field<T>, mv: Multivector<T>): T[] {
   if (mv.k > mv.n) return [];
+  const kept = keptCoefficients(mv);
+  if (kept !== undefined) return kept.slice();
   const out = new Array<T>(binomial(mv.n, mv.k));
   forEachSubset(mv.n, mv.k, (s, rank) => {
     out[rank] = mv.terms.get(subsetKey(s))?.coeff ?? F.zero;
@@ -212,26 +253,49 @@ export function toDense<T>(F: Field<T>, mv: Multivector<T>): T[] {
   return out;
 }
 
-/** The multivector whose coefficients, in lexicographic order of subsets, are `values` (length C(n, k)). */
+/**
+ * The multivector whose coefficients, in lexicographic order of subsets, are
+ * `values` (length C(n, k)). It keeps a copy of them; its `terms` is an
+ * ordinary enumerable property that is computed on first reading and then
+ * stays (see the file comment).
+ */
 export function fromDense<T>(F: Field<T>, n: number, k: number, values: readonly T[]): Multivector<T> {
   checkShape(n, k, 'fromDense');
   const expected = k > n ? 0 : binomial(n, k);
   if (values.length !== expected) {
     throw new RangeError(`fromDense: ${values.length} values given, expected C(${n}, ${k}) = ${expected}`);
   }
-  const terms = new Map<string, MultivectorTerm<T>>();
-  if (k <= n) {
-    forEachSubset(n, k, (s, rank) => {
-      const c = values[rank]!;
-      if (!F.isZero(c)) terms.set(subsetKey(s), { subset: s.slice(), coeff: c });
-    });
+  const kept = new Array<T>(expected);
+  let nonzero = 0;
+  for (let r = 0; r < expected; r++) {
+    const c = values[r]!;
+    if (F.isZero(c)) kept[r] = F.zero;
+    else {
+      kept[r] = c;
+      nonzero++;
+    }
   }
-  return { n, k, terms };
+  const mv = { n, k } as Multivector<T>;
+  Object.defineProperty(mv, 'terms', {
+    enumerable: true,
+    configurable: true,
+    get(): Map<string, MultivectorTerm<T>> {
+      const terms = termsOfDense(F, n, k, kept);
+      Object.defineProperty(mv, 'terms', { value: terms, enumerable: true, writable: true, configurable: true });
+      return terms;
+    },
+  });
+  denseCoefficients.set(mv, { values: kept, nonzero });
+  return mv;
 }
 
 /** Same dimension, same degree and equal coefficients. */
 export function equalsMV<T>(F: Field<T>, a: Multivector<T>, b: Multivector<T>): boolean {
-  if (a.n !== b.n || a.k !== b.k || a.terms.size !== b.terms.size) return false;
+  if (a.n !== b.n || a.k !== b.k) return false;
+  const da = keptCoefficients(a);
+  const db = keptCoefficients(b);
+  if (da !== undefined && db !== undefined) return da.every((c, r) => F.eq(c, db[r]!));
+  if (a.terms.size !== b.terms.size) return false;
   for (const [key, t] of a.terms) {
     const u = b.terms.get(key);
     if (u === undefined || !F.eq(t.coeff, u.coeff)) return false;

@@ -39,6 +39,8 @@ export const BUILTINS: readonly Builtin[] = [
   { name: 'degree', signature: 'degree(X)', summary: 'the degree of the Grassmannian X in its Plücker embedding' },
   { name: 'intersection_number', signature: 'intersection_number(c)', summary: 'the coefficient of the point class in a Schubert class: the intersection number of a top-degree product' },
   { name: 'dual', signature: 'dual(c)', summary: 'the dual class: σ_λ ↦ σ_λ∨, the complement of λ in the box turned around' },
+  { name: 'at', signature: 'at(x, t = 2)', summary: 'the member of a family at given values of its parameters' },
+  { name: 'degeneracy', signature: 'degeneracy(W)', summary: 'where the basis of a family drops rank: the gcd of its maximal minors, factored, with its zeros' },
   { name: 'transversals', signature: 'transversals(L1, L2, L3, L4)', summary: 'the lines of projective 3-space meeting four given lines' },
 ];
 

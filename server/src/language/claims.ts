@@ -21,6 +21,13 @@ import type { TextEdit } from './types.js';
 import { describeValue, type Scalar, type SubspaceValue, type Value } from './values.js';
 import { formatClass } from '../engine/schubert-calculus.js';
 import { classesEqual } from './schubert-calculus.js';
+import { witnessValue } from './parameters.js';
+
+/** In a family: a value of the parameters where a nonzero relation value stays nonzero, as a clause. */
+function familyWitness(env: Environment, value: Scalar): string {
+  const at = witnessValue(env, value);
+  return at ? `; for instance at ${at}` : '';
+}
 
 export interface ClaimOutcome {
   holds: boolean;
@@ -94,7 +101,8 @@ function decomposableClaim(
       claimed,
       found:
         `${text} is not decomposable: ${describeRelation(env, d.relation, n)}; ` +
-        `the vectors v with v ∧ ${text} = 0 span a space of dimension ${d.divisorDimension}, not ${mv.mv.k}`,
+        `the vectors v with v ∧ ${text} = 0 span a space of dimension ${d.divisorDimension}, not ${mv.mv.k}` +
+        familyWitness(env, d.relation.value),
       latex: relationLatex(env, d.relation, n),
     };
   }
@@ -241,7 +249,7 @@ function equalityClaim(
     const shown = displayPoint(env, p.dense, p.n, p.k);
     const equal = projectivelyEqual(F, p.dense, literal);
     if (equal) return verdict(true, `${thingText} is the projective point ${formatPoint(F, shown.normalized)} (${shown.applied})`, '', 'claim/plucker');
-    const mismatch = firstMismatch(env, shown.raw, point.values, false, (i) => `p${shown.labels[i]}`);
+    const mismatch = firstMismatch(env, shown.raw, point.values, false, (i) => `p${shown.labelAt(i)}`);
     return verdict(
       false,
       `${thingText} is ${formatPoint(F, shown.normalized)} (${shown.applied}), which is not a multiple of ${formatPoint(F, point.values)}${mismatch}`,
@@ -271,11 +279,14 @@ function equalityClaim(
   if (subject.t === 'scalar' && other.t === 'scalar') {
     const equal = F.eq(subject.value, other.value);
     const literal = s.relation.other!.type === 'number' || s.relation.other!.type === 'unary';
-    const found = equal
+    // In a family an equation is an identity: a false one is shown failing at one value of the parameters.
+    const witness = equal ? undefined : witnessValue(env, F.sub(subject.value, other.value));
+    const found = (equal
       ? `${subjectText} = ${F.format(subject.value)}`
       : literal
         ? `${subjectText} is ${F.format(subject.value)}, not ${F.format(other.value)}`
-        : `${subjectText} = ${F.format(subject.value)} and ${otherText} = ${F.format(other.value)}`;
+        : `${subjectText} = ${F.format(subject.value)} and ${otherText} = ${F.format(other.value)}`) +
+      (witness ? `; the two sides differ at ${witness.replace(/ \(where it is .*\)$/, '')}` : '');
     // Only a number as written is replaced (`claim t = -2`), never an expression such as `-b`.
     const o = s.relation.other!;
     const number = o.type === 'number' || (o.type === 'unary' && o.operand.type === 'number');

@@ -8,7 +8,7 @@
  * workspace settings (the analyze options) and then the defaults below.
  */
 import type { AnyField } from '../engine/fields.js';
-import { forEachSubset, rankLex } from '../engine/subsets.js';
+import { binomial, forEachSubset, rankLex } from '../engine/subsets.js';
 import type { ConventionStmt, NormalizeStmt, Program } from './ast.js';
 import { NORMALIZATIONS, type Normalization, type Problem } from './types.js';
 
@@ -129,19 +129,25 @@ export class Labels {
  * The lexicographic ranks of the k-subsets of an n-set in the order the
  * convention lists them. Identity for `lex`; for `colex` the subsets are
  * ordered by their largest element first.
+ *
+ * Colex needs no sorting: reflecting every index i to n−1−i turns the
+ * comparison from the largest element down into the lexicographic comparison
+ * with the inequality reversed, so the reflections of the subsets, walked in
+ * lexicographic order, list the subsets in colex order backwards.
  */
 export function displayOrder(order: IndexOrder, n: number, k: number): number[] {
-  const subsets: number[][] = [];
-  forEachSubset(n, k, (s) => {
-    subsets.push(s.slice());
+  const total = binomial(n, k);
+  const out = new Array<number>(total);
+  const reflected = new Array<number>(k);
+  forEachSubset(n, k, (s, rank) => {
+    if (order === 'lex') {
+      out[rank] = rank;
+      return;
+    }
+    for (let i = 0; i < k; i++) reflected[i] = n - 1 - s[k - 1 - i]!;
+    out[total - 1 - rank] = rankLex(reflected, n);
   });
-  if (order === 'colex') {
-    subsets.sort((a, b) => {
-      for (let i = a.length - 1; i >= 0; i--) if (a[i] !== b[i]) return a[i]! - b[i]!;
-      return 0;
-    });
-  }
-  return subsets.map((s) => rankLex(s, n));
+  return out;
 }
 
 /** The settings of a file's header statements, with problems for unknown or contradictory ones. */

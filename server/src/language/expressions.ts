@@ -3,6 +3,7 @@
  * failure is a `Failure` carrying a problem with the span of the offending
  * sub-expression, or `Poisoned` when an earlier failure already explains it.
  */
+import { callParameters } from './parameters.js';
 import { callSchubertCalculus, classArithmetic } from './schubert-calculus.js';
 import { DivisionByZeroError } from '../engine/field.js';
 import { findDependency, intersectRowSpaces, kernel, rref, sumRowSpaces } from '../engine/matrix.js';
@@ -326,7 +327,7 @@ function log2Magnitude(x: bigint): number {
 }
 
 function power(env: Environment, base: Scalar, exponent: bigint, span: Span): Scalar {
-  if (env.F.characteristic === 0n) {
+  if (env.F.characteristic === 0n && typeof (base as Partial<Rational>).num === 'bigint') {
     // Over the rationals the result has about exponent · log2 max(|num|, den) bits (0 for 0, 1 and −1).
     const { num, den } = base as Rational;
     const bitsPerFactor = Math.max(log2Magnitude(num), log2Magnitude(den));
@@ -581,7 +582,7 @@ function call(env: Environment, e: Call, ctx: ExprContext): Value {
     }
     default: {
       const evaluateArg = (arg: Expr) => evaluate(env, arg, ctx);
-      const builtinValue = callGeometry(env, e, evaluateArg) ?? callCombinatorics(env, e, evaluateArg) ?? callSchubertCalculus(env, e, evaluateArg);
+      const builtinValue = callGeometry(env, e, evaluateArg) ?? callCombinatorics(env, e, evaluateArg) ?? callSchubertCalculus(env, e, evaluateArg) ?? callParameters(env, e, evaluateArg);
       if (builtinValue) return builtinValue;
       const bound = env.bindings.get(e.callee.name);
       if (bound) {

@@ -4,7 +4,10 @@
  * coordinates also carries the convention it was computed in: index order,
  * labels and layout come from the file's convention (see `coordinates.ts`).
  */
+import { familyZeros } from './parameters.js';
+import { presentDegeneracy } from './present-families.js';
 import { presentClass, presentGrassmannian, presentTransversals } from './present-schubert-calculus.js';
+import type { AnyField } from '../engine/fields.js';
 import { toDense, sortedTerms } from '../engine/multivector.js';
 import { binomialBig } from '../engine/subsets.js';
 import { grassmannianDimension } from '../engine/grassmannian.js';
@@ -20,6 +23,7 @@ import { presentCompound, presentFlag, presentMap, presentQuotient, presentSchub
 import type { ChartValue, MultivectorValue, Scalar, SpaceInfo, SubspaceValue, Value, VectorValue } from './values.js';
 import type { ResultParts } from './types.js';
 import { basisImage, chartImage, pointPatternImage } from './svg/value-images.js';
+import { defineLazy } from './lazy-property.js';
 
 /** A picture as a paragraph of its own, or nothing when the value is past the legible sizes. */
 function picture(markdown: string | undefined): string[] {
@@ -69,7 +73,7 @@ function matrixTex(env: Environment, vectors: readonly (readonly Scalar[])[]): s
 
 /** `p12 = 1   p13 = 3 …`, wrapped, at most `limit` entries, in display order. */
 function labelledList(env: Environment, point: DisplayedPoint, values: readonly Scalar[], limit: number): string {
-  const entries = values.slice(0, limit).map((v, i) => `p${point.labels[i]} = ${s(env, v)}`);
+  const entries = values.slice(0, limit).map((v, i) => `p${point.labelAt(i)} = ${s(env, v)}`);
   const width = Math.max(...entries.map((e) => e.length));
   const perLine = Math.max(1, Math.floor(64 / (width + 3)));
   const lines: string[] = [];
@@ -80,13 +84,17 @@ function labelledList(env: Environment, point: DisplayedPoint, values: readonly 
   return lines.join('\n');
 }
 
-function shortPoint(env: Environment, values: readonly Scalar[]): string {
-  if (values.length <= LENS_COORDINATES) return formatPoint(env.F, values);
-  return `[${values.slice(0, LENS_COORDINATES).map((x) => s(env, x)).join(' : ')} : …] (${values.length} coordinates)`;
+/** The normalized point on a lens line: all of it up to ten coordinates, else the first ten and the count. */
+function shortPoint(env: Environment, point: DisplayedPoint): string {
+  if (point.count <= LENS_COORDINATES) return formatPoint(env.F, point.normalized);
+  // Only the coordinates shown are normalized: at G(10,20) that is 10 of 184,756.
+  const first = Array.from({ length: LENS_COORDINATES }, (_, i) => s(env, point.normalizedAt(i)));
+  return `[${first.join(' : ')} : …] (${point.count} coordinates)`;
 }
 
-function hoverPoint(env: Environment, values: readonly Scalar[]): string {
-  return values.length <= HOVER_COORDINATES ? formatPoint(env.F, values) : shortPoint(env, values);
+/** The normalized point in a hover: all of it up to sixty coordinates, else as on a lens line. */
+function hoverPoint(env: Environment, point: DisplayedPoint): string {
+  return point.count <= HOVER_COORDINATES ? formatPoint(env.F, point.normalized) : shortPoint(env, point);
 }
 
 /** The labelled Plücker vector in LaTeX: (p_{12}, p_{13}, …) = [1 : 3 : …]. */
@@ -107,6 +115,28 @@ function grassmannianWords(k: number, n: number): string {
 
 function layoutWords(env: Environment): string {
   return env.convention.layout === 'columns' ? 'columns' : 'rows';
+}
+
+/**
+ * The `plucker` field of a subspace's JSON: every coordinate as exact text, for `--json`, made only when it
+ * is read (the editor never reads it). Made here, apart from the presentation, so that it holds the field
+ * and the point alone.
+ */
+function lazyPluckerJson(json: Record<string, unknown>, F: AnyField, point: DisplayedPoint, minorsOf: 'given' | 'reduced'): void {
+  defineLazy(json, 'plucker', () => ({
+    labels: point.labels,
+    raw: point.raw.map((x) => F.format(x)),
+    normalized: point.normalized.map((x) => F.format(x)),
+    normalization: point.applied,
+    minorsOf,
+  }));
+}
+
+/** The point fields of a multivector's JSON, the long lists made only when read (as `lazyPluckerJson`). */
+function lazyPointJson(json: Record<string, unknown>, F: AnyField, point: DisplayedPoint): void {
+  defineLazy(json, 'labels', () => point.labels);
+  defineLazy(json, 'normalized', () => point.normalized.map((x) => F.format(x)));
+  json.normalization = point.applied;
 }
 
 export function presentSubspace(env: Environment, w: SubspaceValue, lexPlucker: Scalar[] | undefined): Presented {
@@ -137,17 +167,11 @@ export function presentSubspace(env: Environment, w: SubspaceValue, lexPlucker: 
       '',
       `**Plücker coordinates** (${count} = C(${n},${k}), minors of ${source}):`,
       codeBlock(labelledList(env, point, point.raw, HOVER_COORDINATES)),
-      `**Projective point** (${point.applied}): ${hoverPoint(env, point.normalized)}`,
+      `**Projective point** (${point.applied}): ${hoverPoint(env, point)}`,
       ...picture(pointPatternImage(env, point)),
     );
-    summary += ` · ${shortPoint(env, point.normalized)} (${point.applied})`;
-    json.plucker = {
-      labels: point.labels,
-      raw: point.raw.map((x) => s(env, x)),
-      normalized: point.normalized.map((x) => s(env, x)),
-      normalization: point.applied,
-      minorsOf: w.given ? 'given' : 'reduced',
-    };
+    summary += ` · ${shortPoint(env, point)} (${point.applied})`;
+    lazyPluckerJson(json, env.F, point, w.given ? 'given' : 'reduced');
     latex = count <= LATEX_COORDINATES ? labelledPointLatex(env, point) : `${latex}, \\quad \\text{${count} Pl\\"ucker coordinates}`;
     if (count <= LATEX_COORDINATES) parts.plucker = latex;
   }
@@ -211,11 +235,9 @@ export function presentMultivector(env: Environment, v: MultivectorValue): Prese
     const point = countFits ? displayPoint(env, toDense(F, v.mv), n, k) : undefined;
     if (point) {
       applied = point.applied;
-      json.labels = point.labels;
-      json.normalized = point.normalized.map((x) => s(env, x));
-      json.normalization = point.applied;
+      lazyPointJson(json, env.F, point);
     }
-    const shown = point ? ` · ${shortPoint(env, point.normalized)} (${point.applied})` : '';
+    const shown = point ? ` · ${shortPoint(env, point)} (${point.applied})` : '';
     if (d.kind === 'decomposable') {
       summary = `decomposable · comes from a ${k}-dimensional subspace${shown}`;
       lines.push(
@@ -257,7 +279,7 @@ export function presentMultivector(env: Environment, v: MultivectorValue): Prese
     } else {
       summary = 'zero';
     }
-    if (point) lines.push('', `**Projective point** (${point.applied}): ${hoverPoint(env, point.normalized)}`, ...picture(pointPatternImage(env, point)));
+    if (point) lines.push('', `**Projective point** (${point.applied}): ${hoverPoint(env, point)}`, ...picture(pointPatternImage(env, point)));
   }
   lines.push('', conventionSentence(env.convention, applied));
   json.convention = conventionJson(env.convention, applied);
@@ -301,11 +323,18 @@ export function presentChart(env: Environment, c: ChartValue): Presented {
   };
 }
 
+/** The file's field in LaTeX: \\mathbb{Q}, \\mathbb{F}_{7}, or with parameters \\mathbb{Q}(t). */
+function fieldLatex(F: AnyField): string {
+  const family = (F as { family?: { base: AnyField; variables: readonly string[] } }).family;
+  if (family) return `${fieldLatex(family.base)}(${family.variables.join(', ')})`;
+  return F.name === 'QQ' ? '\\mathbb{Q}' : `\\mathbb{F}_{${finiteFieldOrder(F) ?? F.characteristic}}`;
+}
+
 export function presentSpace(env: Environment, space: SpaceInfo): Presented {
   return {
     summary: `${env.F.name}^${space.dim} · basis ${abbreviate(space.basisNames)}`,
     hover: `A ${space.dim}-dimensional space over ${env.F.name} with basis ${space.basisNames.join(', ')}${space.namedBasis ? '' : ' (the default names)'}.`,
-    latex: `${nameLatex(space.name)} \\cong ${env.F.name === 'QQ' ? '\\mathbb{Q}' : `\\mathbb{F}_{${finiteFieldOrder(env.F) ?? env.F.characteristic}}`}^{${space.dim}}`,
+    latex: `${nameLatex(space.name)} \\cong ${fieldLatex(env.F)}^{${space.dim}}`,
     json: { dim: space.dim, basis: space.basisNames, field: env.F.name },
   };
 }
@@ -323,6 +352,8 @@ export function presentValue(env: Environment, v: Value): Presented {
       return presentClass(v);
     case 'transversals':
       return presentTransversals(env, v);
+    case 'degeneracy':
+      return presentDegeneracy(env, v);
     case 'subspace':
       return presentSubspaceWithPlucker(env, v);
     case 'vector':
@@ -333,8 +364,15 @@ export function presentValue(env: Environment, v: Value): Presented {
       return presentChart(env, v);
     case 'space':
       return presentSpace(env, v.space);
-    case 'scalar':
-      return { summary: s(env, v.value), hover: `${s(env, v.value)} in ${env.F.name}`, latex: env.F.latex(v.value), json: { value: s(env, v.value) } };
+    case 'scalar': {
+      const zeros = familyZeros(env, v.value);
+      return {
+        summary: s(env, v.value),
+        hover: `${s(env, v.value)} in ${env.F.name}${zeros ? `\n\n${zeros.sentence}` : ''}`,
+        latex: env.F.latex(v.value),
+        json: { value: s(env, v.value), ...(zeros ? { zeros: zeros.values } : {}) },
+      };
+    }
     case 'integer':
       return { summary: String(v.value), hover: String(v.value), latex: String(v.value), json: { value: v.value } };
     case 'point':

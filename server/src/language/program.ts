@@ -3,6 +3,7 @@
  * results and problems. A statement that fails reports one problem and leaves
  * its name bound to nothing, so later uses stay quiet instead of cascading.
  */
+import { parametricField } from './parameters.js';
 import type { AnyField } from '../engine/fields.js';
 import { finiteField } from '../engine/finite-fields.js';
 import { FieldOrderLimitError } from '../engine/extension-field.js';
@@ -385,7 +386,11 @@ export function evaluateProgram(
   hooks: EvaluationHooks = {},
 ): ProgramOutcome {
   const problems: Problem[] = [];
-  const { field } = chooseField(program, problems);
+  const { field: base } = chooseField(program, problems);
+  // Declared parameters make the file compute over the rational functions in them (./parameters.ts).
+  const parameters = program.statements.flatMap((s) => (s.type === 'parameter' ? s.names : []));
+  const parameterNames = [...new Set(parameters.map((p) => p.name))];
+  const field = parameterNames.length > 0 ? parametricField(base, parameterNames) : base;
   const convention: Convention = { field, ...fileConvention };
   const env: Environment = {
     F: field,
@@ -399,9 +404,16 @@ export function evaluateProgram(
     problems,
   };
   const generator = program.statements.find((s): s is FieldStmt => s.type === 'field' && s.generator !== undefined)?.generator;
-  const generatorElement = (field as { generatorElement?: () => unknown }).generatorElement;
+  const generatorElement = (base as { generatorElement?: () => unknown }).generatorElement;
   if (generator && generatorElement) {
-    env.bindings.set(generator.name, { value: { t: 'scalar', value: generatorElement.call(field) }, declSpan: generator.span, nameSpan: generator.span });
+    const element = generatorElement.call(base);
+    const value = field === base ? element : (field as unknown as { fromBase(x: unknown): unknown }).fromBase(element);
+    env.bindings.set(generator.name, { value: { t: 'scalar', value }, declSpan: generator.span, nameSpan: generator.span });
+  }
+  for (const p of parameters) {
+    if (env.bindings.has(p.name)) continue; // declared twice: reported by name resolution
+    const value = (field as unknown as { variable(name: string): unknown }).variable(p.name);
+    env.bindings.set(p.name, { value: { t: 'scalar', value }, declSpan: p.span, nameSpan: p.span });
   }
   const evaluator = new ProgramEvaluator(env, source);
   hooks.memo?.begin();

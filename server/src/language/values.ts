@@ -231,8 +231,25 @@ export interface TransversalsValue {
   result: FourLineTransversals<Scalar>;
 }
 
+/** Where the basis of a family drops rank: the gcd of its maximal minors (`degeneracy(W)`). */
+export interface DegeneracyValue {
+  t: 'degeneracy';
+  subspace: SubspaceValue;
+  /** The gcd of the maximal minors of the basis as given, normalized (0 when the rank is lower everywhere). */
+  gcd: unknown;
+  /** The gcd factored, as text and LaTeX. */
+  text: string;
+  latex: string;
+  /** Its zeros in the field, for one parameter: the values where the rank drops, with multiplicities. */
+  roots: { value: Scalar; multiplicity: number }[];
+  /** The total degree of the gcd. */
+  degree: number;
+  variables: readonly string[];
+}
+
 export type Value =
   | ScalarValue
+  | DegeneracyValue
   | GrassmannianValue
   | ClassValue
   | TransversalsValue
@@ -264,6 +281,8 @@ export function describeValue(v: Value): string {
       return 'a scalar';
     case 'integer':
       return 'a whole number';
+    case 'degeneracy':
+      return 'the degeneracy locus of a family';
     case 'grassmannian':
       return `the Grassmannian G(${v.k},${v.n})`;
     case 'class':

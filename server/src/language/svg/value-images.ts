@@ -9,6 +9,7 @@ import type { DisplayedPoint } from '../coordinates.js';
 import type { Environment } from '../environment.js';
 import type { ChartValue, PositivityValue, Scalar, SchubertValue } from '../values.js';
 import { matrixImage, signPatternImage, youngDiagramImage, type Mark } from './hover-images.js';
+import { SIGN_PATTERN_LIMIT } from './sign-pattern.js';
 
 function texts(env: Environment, rows: readonly (readonly Scalar[])[]): string[][] {
   return rows.map((r) => r.map((x) => env.F.format(x)));
@@ -54,12 +55,16 @@ function markOf(env: Environment, x: Scalar): Mark {
 
 /** The pattern of the projective point as the hover lists it (display order, normalized). */
 export function pointPatternImage(env: Environment, point: DisplayedPoint): string | undefined {
+  // Past the legible size there is no picture, so there is no need to list every label and sign.
+  if (point.count === 0 || point.count > SIGN_PATTERN_LIMIT) return undefined;
   const what = env.F.sign ? `Sign pattern of the projective point (${point.applied})` : 'Zero pattern of the projective point';
   return signPatternImage(point.labels, point.normalized.map((x) => markOf(env, x)), what);
 }
 
 /** The signs a positivity result reports (lexicographic, as its hover lists them). */
 export function positivityImage(env: Environment, p: PositivityValue): string | undefined {
+  // As for a projective point: no picture past the legible size, so no labels for one.
+  if (p.signs.length === 0 || p.signs.length > SIGN_PATTERN_LIMIT) return undefined;
   const n = p.subspace.space.dim;
   const k = p.subspace.basis.length;
   const labels = p.signs.map((_, i) => env.labels.label(unrankLex(i, n, k), n));
