@@ -55,10 +55,11 @@ import { resultItems } from './results-items.js';
 import { RESULTS_CAPABILITY, RESULTS_NOTIFICATION, type ResultsParams } from './results-protocol.js';
 import { DEFAULT_SETTINGS, parseSettings, type Settings } from './settings.js';
 import { threadWorkerFactory, WorkerPool } from './worker-pool.js';
+import { RecentDurations } from './recent-durations.js';
 
 /**
- * Delay after the last keystroke before the quick (syntax and names) pass, when the document's last quick pass
- * took longer than `CHEAP_QUICK_PASS_MS`: then it is worth waiting for a pause in typing.
+ * Delay after the last keystroke before the quick (syntax and names) pass, when the document's recent quick passes
+ * took longer than `CHEAP_QUICK_PASS_MS` (their median): then it is worth waiting for a pause in typing.
  */
 export const QUICK_PASS_DELAY_MS = 150;
 /**
@@ -202,15 +203,18 @@ export function startServer(connection: Connection, options: ServerOptions = {})
   const quickKey = (uri: string) => `quick ${uri}`;
   const evaluateKey = (uri: string) => `evaluate ${uri}`;
 
-  /** How long each document's last quick pass took, which decides how long the next one waits. */
-  const quickPassMs = new Map<string, number>();
+  /** How long each document's recent quick passes took, which decides how long the next one waits. */
+  const quickPassMs = new RecentDurations();
 
   /** Runs the quick pass of the current version unless it (or an evaluation of it) is already there. */
   function ensureQuickPass(entry: OpenDocument): void {
     if (evaluationIsCurrent(entry) || entry.quick?.version === entry.document.version) return;
+    // The first pass of a document parses all of it, cold; the passes after edits reuse its pieces. Only
+    // those tell what the next keystroke will cost.
+    const afterAnEdit = entry.quick !== undefined;
     const started = performance.now();
     documents.recordQuick(entry, analyze(entry.document.getText(), { evaluate: false }));
-    quickPassMs.set(entry.document.uri, performance.now() - started);
+    if (afterAnEdit) quickPassMs.record(entry.document.uri, performance.now() - started);
   }
 
   function runQuickPass(uri: string): void {
@@ -220,17 +224,18 @@ export function startServer(connection: Connection, options: ServerOptions = {})
     publish(entry);
   }
 
-  /** How long each document's last finished evaluation took in its worker, which decides when the next starts. */
-  const evaluationMs = new Map<string, number>();
+  /** How long each document's recent finished evaluations took in their worker, which decides when the next starts. */
+  const evaluationMs = new RecentDurations();
 
   function typingEvaluationDelay(uri: string): number {
-    const last = evaluationMs.get(uri);
-    return last !== undefined && last <= CHEAP_EVALUATION_MS ? 0 : EVALUATE_WHILE_TYPING_DELAY_MS;
+    const typical = evaluationMs.typical(uri);
+    return typical === undefined || typical <= CHEAP_EVALUATION_MS ? 0 : EVALUATE_WHILE_TYPING_DELAY_MS;
   }
 
   function quickPassDelay(uri: string): number {
-    const last = quickPassMs.get(uri);
-    return last !== undefined && last <= CHEAP_QUICK_PASS_MS ? 0 : QUICK_PASS_DELAY_MS;
+    // Before any pass after an edit the first keystroke is answered at once: it measures what the next cost.
+    const typical = quickPassMs.typical(uri);
+    return typical === undefined || typical <= CHEAP_QUICK_PASS_MS ? 0 : QUICK_PASS_DELAY_MS;
   }
 
   function logOutcome(uri: string, version: number, outcome: EvaluationOutcome): void {
@@ -290,7 +295,10 @@ export function startServer(connection: Connection, options: ServerOptions = {})
       return;
     }
     if (outcome.status === 'finished') {
-      evaluationMs.set(uri, outcome.elapsedMs);
+      // The first evaluation of a document runs every statement; later ones replay the unchanged ones from the
+      // worker's memo. Only those tell what evaluating after the next keystroke will cost.
+      const afterAnEdit = entry.evaluation !== undefined;
+      if (afterAnEdit) evaluationMs.record(uri, outcome.elapsedMs);
       documents.recordEvaluation(entry, outcome.analysis, ticket);
     } else {
       documents.recordStopped(entry, text, unfinishedEvaluationProblem(outcome, text, timeoutMs)!, ticket);
