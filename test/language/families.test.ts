@@ -64,6 +64,26 @@ describe('families depending on a parameter', () => {
     assert.ok(raw.includes('(t - 1) (t^2 + t + 1)'), raw.join(' | '));
   });
 
+  test('a chart of the family says for which t it applies: where its minor is not zero', () => {
+    const a = expectAnalysis(`
+      field QQ
+      parameter t
+      space V dim 4
+      subspace L = rows [ 1 t 0 1
+                          0 1 t t^2 ]
+      show chart(L, 13)
+      show chart(L, 12)
+    `);
+    const [c13, c12] = shows(a);
+    const except = /for every t except (-?\d+)/.exec(c13!.hover);
+    assert.ok(except, c13!.hover);
+    // The minor on columns 1 and 3 vanishes exactly there (mathjs), and not at other values.
+    const minor13 = (t: number) => Number(math.det(math.matrix([[1, 0], [0, t]])));
+    assert.equal(Math.abs(minor13(Number(except[1]))), 0);
+    assert.notEqual(minor13(2), 0);
+    assert.match(c12!.hover, /applies for every value of t/);
+  });
+
   test('the quadratic Plücker relation holds identically: the family is decomposable for every t', () => {
     const a = expectAnalysis(FAMILY);
     assert.equal(a.problems.length, 0);

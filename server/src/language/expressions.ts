@@ -3,7 +3,7 @@
  * failure is a `Failure` carrying a problem with the span of the offending
  * sub-expression, or `Poisoned` when an earlier failure already explains it.
  */
-import { callParameters } from './parameters.js';
+import { callParameters, chartInFamilyNote } from './parameters.js';
 import { callSchubertCalculus, classArithmetic } from './schubert-calculus.js';
 import { DivisionByZeroError } from '../engine/field.js';
 import { findDependency, intersectRowSpaces, kernel, rref, sumRowSpaces } from '../engine/matrix.js';
@@ -578,7 +578,8 @@ function call(env: Environment, e: Call, ctx: ExprContext): Value {
           `${env.labels.name(sorted, w.space.dim)} = 0: this subspace is not in the chart where ${env.labels.name(sorted, w.space.dim)} ≠ 0; choose columns whose Plücker coordinate is nonzero`,
         );
       }
-      return { t: 'chart', subspace: w, columns, otherColumns: c.otherColumns, block: c.block, full: c.full };
+      const note = chartInFamilyNote(env, w, columns);
+      return { t: 'chart', subspace: w, columns, otherColumns: c.otherColumns, block: c.block, full: c.full, ...(note ? { note } : {}) };
     }
     default: {
       const evaluateArg = (arg: Expr) => evaluate(env, arg, ctx);

@@ -22,6 +22,7 @@ import {
   type RationalFunctionField,
 } from '../engine/polynomials/index.js';
 import { pluckerCoordinates } from '../engine/plucker.js';
+import { determinant } from '../engine/matrix.js';
 import { fromDense, toDense } from '../engine/multivector.js';
 import type { Call, Ident } from './ast.js';
 import { subspaceOf } from './arguments.js';
@@ -236,4 +237,22 @@ export function familyZeros(env: Environment, x: Scalar): { sentence: string; va
       ? `Zero exactly at ${roots.map((r) => `${t} = ${K.base.format(r.value)}${r.multiplicity > 1 ? ` (multiplicity ${r.multiplicity})` : ''}`).join(', ')}${roots.reduce((a, r) => a + r.multiplicity, 0) < K.ring.totalDegree(x.num) ? ', and where its other factors vanish, outside the field' : ''}.`
       : `Zero at no value of ${t} in the field.`;
   return { sentence, values };
+}
+
+/**
+ * In a family: where the chart with the identity in `columns` stops applying, the zeros of the minor of
+ * the basis on those columns (in words, for the chart's hover); undefined outside families.
+ */
+export function chartInFamilyNote(env: Environment, w: SubspaceValue, columns: readonly number[]): string | undefined {
+  const K = familyField(env.F);
+  if (!K) return undefined;
+  const rows = w.given ?? w.basis;
+  const minor = determinant(env.F, rows.map((r) => columns.map((c) => r[c])));
+  const name = `the minor on columns ${columns.map((c) => env.labels.position(c)).join(', ')}`;
+  const zeros = familyZeros(env, minor);
+  if (K.variables.length === 1 && zeros && zeros.values.length > 0) {
+    return `The chart applies where ${name}, ${env.F.format(minor)}, is not zero: for every ${K.variables[0]} except ${zeros.values.join(', ')} (there it has no point of this family).`;
+  }
+  if (zeros === undefined && K.ring.isConstant(minor.num)) return `The chart applies for every value of ${K.variables.join(', ')}: ${name} is a nonzero constant.`;
+  return `The chart applies where ${name}, ${env.F.format(minor)}, is not zero.`;
 }

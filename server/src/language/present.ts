@@ -306,6 +306,7 @@ export function presentChart(env: Environment, c: ChartValue): Presented {
       '',
       `Chart coordinates Y (${k}×${n - k} = ${k * (n - k)} free entries, columns ${others}):`,
       codeBlock(matrixText(env, c.block)),
+      ...(c.note ? ['', c.note] : []),
       '',
       conventionSentence(env.convention),
     ].join('\n'),

@@ -152,6 +152,8 @@ export interface ChartValue {
   block: Scalar[][];
   /** k×n: the basis with the identity in `columns`. */
   full: Scalar[][];
+  /** In a family: where the chart stops applying (the zeros of its minor), in words. */
+  note?: string;
 }
 
 /** The matroid of a subspace's basis columns, over the file's field. */
