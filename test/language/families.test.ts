@@ -138,6 +138,19 @@ describe('families depending on a parameter', () => {
     for (const s of [0, 1, -2, 7]) assert.equal(Math.abs(Number(math.det(math.matrix([[1, s, 0, 0], [0, 0, 1, s], [1, 0, 0, 0], [0, 1, 0, 0]])))), 0);
   });
 
+  test('any false claim of a family names a member for which it is false, checked at that member', () => {
+    const text = ['field QQ', 'parameter t', 'space V dim 4', 'subspace L = rows [ 1 t 0 1', ' 0 1 t t^2 ]', 'vector v = (1, 0, 0, 0)', 'claim v in L', ''].join('\n');
+    const a = analyze(text, { evaluate: true });
+    assert.deepEqual(a.problems.map((p) => p.code), ['claim/membership']);
+    const at = /false for instance at t = (-?\d+)/.exec(a.problems[0]!.message);
+    assert.ok(at, a.problems[0]!.message);
+    const t = Number(at[1]);
+    // At that t, v with the two rows has rank 3: some 3×3 minor of the 3×4 matrix is not zero (mathjs).
+    const rows = [[1, t, 0, 1], [0, 1, t, t * t], [1, 0, 0, 0]];
+    const minors3 = [[0, 1, 2], [0, 1, 3], [0, 2, 3], [1, 2, 3]].map((cols) => Number(math.det(math.matrix(rows.map((r) => cols.map((c) => r[c]!))))));
+    assert.ok(minors3.some((m) => m !== 0));
+  });
+
   test('wrong uses: at() without a parameter value, an unknown parameter, a value that depends on t', () => {
     expectAnalysis(`
       field QQ

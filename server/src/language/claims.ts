@@ -21,7 +21,7 @@ import type { TextEdit } from './types.js';
 import { describeValue, type Scalar, type SubspaceValue, type Value } from './values.js';
 import { formatClass } from '../engine/schubert-calculus.js';
 import { classesEqual } from './schubert-calculus.js';
-import { witnessValue } from './parameters.js';
+import { failingMember, familyField, witnessValue } from './parameters.js';
 
 /** In a family: a value of the parameters where a nonzero relation value stays nonzero, as a clause. */
 function familyWitness(env: Environment, value: Scalar): string {
@@ -47,9 +47,18 @@ export interface ClaimOutcome {
 }
 
 export function checkClaim(env: Environment, source: string, s: ClaimStmt): ClaimOutcome {
+  const outcome = claimOutcome(env, source, s);
+  if (outcome.holds || !familyField(env.F) || /differ at|for instance at/.test(outcome.found)) return outcome;
+  // A false identity of a family: name a member for which the claim is false too.
+  const at = failingMember(env, (member) => claimOutcome(env, source, s, member).holds);
+  return at ? { ...outcome, found: `${outcome.found}; it is false for instance at ${at}` } : outcome;
+}
+
+function claimOutcome(env: Environment, source: string, s: ClaimStmt, member?: (v: Value) => Value): ClaimOutcome {
   const claimed = source.slice(s.subject.span.start, s.relation.span.end).replace(/\s+/g, ' ');
   const subjectText = source.slice(s.subject.span.start, s.subject.span.end).replace(/\s+/g, ' ');
-  const subject = evaluate(env, s.subject, {});
+  const evaluated = (e: typeof s.subject): Value => (member ? member(evaluate(env, e, {})) : evaluate(env, e, {}));
+  const subject = evaluated(s.subject);
   const op = s.relation.op;
   if (op === 'decomposable' || op === 'not decomposable') {
     return decomposableClaim(env, subject, subjectText, claimed, op === 'decomposable', s);
@@ -62,7 +71,7 @@ export function checkClaim(env: Environment, source: string, s: ClaimStmt): Clai
   const other: Value =
     (subject.t === 'integer' || subject.t === 'count' || subject.t === 'transversals') && otherExpr.type === 'number' && /^\d+$/.test(otherExpr.text)
       ? { t: 'count', value: BigInt(otherExpr.text), what: 'a number' }
-      : evaluate(env, otherExpr, {});
+      : evaluated(otherExpr);
   const otherText = source.slice(s.relation.other!.span.start, s.relation.other!.span.end).replace(/\s+/g, ' ');
   if (op === 'in' || op === 'not in') return membershipClaim(env, subject, other, subjectText, otherText, claimed, op === 'in', s);
   return equalityClaim(env, subject, other, subjectText, otherText, claimed, op === '=', s);

@@ -256,3 +256,35 @@ export function chartInFamilyNote(env: Environment, w: SubspaceValue, columns: r
   if (zeros === undefined && K.ring.isConstant(minor.num)) return `The chart applies for every value of ${K.variables.join(', ')}: ${name} is a nonzero constant.`;
   return `The chart applies where ${name}, ${env.F.format(minor)}, is not zero.`;
 }
+
+/**
+ * A small value of the parameters (as `t = 2`) for which `holdsFor` is false, given a way to turn each
+ * value of a claim into its member there; undefined when every tried value passes or cannot be taken
+ * (a denominator vanishing, a value that has no member).
+ */
+export function failingMember(env: Environment, holdsFor: (member: (v: Value) => Value) => boolean): string | undefined {
+  const K = familyField(env.F);
+  if (!K) return undefined;
+  const B = K.base;
+  const tries = [0n, 1n, -1n, 2n, -2n, 3n].map((n) => B.fromBigInt(n));
+  const assignments: Record<string, any>[] = [{}];
+  for (const name of K.variables) {
+    const next: Record<string, any>[] = [];
+    for (const a of assignments) for (const v of tries) next.push({ ...a, [name]: v });
+    assignments.splice(0, assignments.length, ...next.slice(0, 200));
+  }
+  const span = { start: 0, end: 0 };
+  for (const values of assignments) {
+    try {
+      const member = (v: Value): Value => (isSubstitutable(v) ? substituted(env, K, v, values, span) : v);
+      if (!holdsFor(member)) return K.variables.map((n) => `${n} = ${B.format(values[n])}`).join(', ');
+    } catch {
+      // No member there (a pole, a value that degenerates): try the next value.
+    }
+  }
+  return undefined;
+}
+
+function isSubstitutable(v: Value): boolean {
+  return v.t === 'scalar' || v.t === 'vector' || v.t === 'subspace' || v.t === 'multivector' || v.t === 'map';
+}
