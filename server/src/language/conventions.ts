@@ -79,8 +79,17 @@ export function conventionSentence(c: Convention, applied?: Normalization): stri
   const order = c.order === 'lex' ? 'lexicographic' : 'colexicographic';
   return (
     `Convention: field ${fieldWords(c.field)}; index sets in ${order} order, labels from ${c.firstLabel}; ` +
-    `basis vectors as ${c.layout}; projective points shown as ${normalizationWords(norm)}${fallbackWords(c.normalization, norm)}.`
+    `basis vectors as ${c.layout}; projective points shown as ${pointWords(c, norm)}.`
   );
+}
+
+/** How points are scaled, in words; in a family (rational functions), primitive means coprime polynomials. */
+function pointWords(c: Convention, norm: Normalization): string {
+  const family = (c.field as { family?: { variables: readonly string[] } }).family;
+  if (family && norm === 'primitive') {
+    return `polynomials in ${family.variables.join(', ')} without common factor, the first nonzero one with a positive (over QQ) or 1 (otherwise) leading coefficient${c.normalization === 'positive' ? ' (asked for positive, which needs numbers)' : ''}`;
+  }
+  return `${normalizationWords(norm)}${fallbackWords(c.normalization, norm)}`;
 }
 
 /** A short tag for a lens line: `QQ, lex from 1, primitive` (and `, columns` when not rows). */
