@@ -15,6 +15,7 @@
  * factor is certified by the structure of the algorithm, so the output is a
  * proven factorisation into irreducibles.
  */
+import { fieldPower } from '../field-square-roots.js';
 import type { Field } from '../field.js';
 import { finiteFieldElement } from '../finite-fields.js';
 import { primeField } from '../prime-field.js';
@@ -56,23 +57,13 @@ export function finiteFieldSize<T>(F: Field<T>): bigint | undefined {
   }
 }
 
-function power<T>(F: Field<T>, a: T, e: bigint): T {
-  let result = F.one;
-  let base = a;
-  for (let k = e; k > 0n; k >>= 1n) {
-    if (k & 1n) result = F.mul(result, base);
-    if (k > 1n) base = F.mul(base, base);
-  }
-  return result;
-}
-
 /** The p-th root of a polynomial whose exponents are all multiples of p: Σ a_(ip) x^(ip) ↦ Σ a_(ip)^(1/p) x^i. */
 function pthRoot<T>(F: Field<T>, q: bigint, a: readonly T[]): T[] {
   const p = Number(F.characteristic);
   // On GF(q) the Frobenius a ↦ a^p is invertible with inverse a ↦ a^(q/p), since a^q = a.
   const rootExponent = q / F.characteristic;
   const out: T[] = [];
-  for (let i = 0; i * p < a.length; i++) out.push(rootExponent === 1n ? a[i * p]! : power(F, a[i * p]!, rootExponent));
+  for (let i = 0; i * p < a.length; i++) out.push(rootExponent === 1n ? a[i * p]! : fieldPower(F, a[i * p]!, rootExponent));
   return trimDense(F, out);
 }
 

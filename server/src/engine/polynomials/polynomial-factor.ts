@@ -26,6 +26,7 @@
  * steps and the linear test apply. The result is checked by multiplying it
  * back out.
  */
+import { fieldPower } from '../field-square-roots.js';
 import type { Field } from '../field.js';
 import { QQ, type Rational } from '../rational.js';
 import { finiteFieldSize } from './finite-field-factor.js';
@@ -64,22 +65,12 @@ function splitByContents<T>(R: PolynomialRing<T>, f: MultivariatePolynomial<T>):
   return [f];
 }
 
-function power<T>(F: Field<T>, a: T, e: bigint): T {
-  let result = F.one;
-  let base = a;
-  for (let k = e; k > 0n; k >>= 1n) {
-    if (k & 1n) result = F.mul(result, base);
-    if (k > 1n) base = F.mul(base, base);
-  }
-  return result;
-}
-
 /** The p-th root of a polynomial over GF(q) all of whose exponents are multiples of p (Frobenius is onto on GF(q)). */
 function pthRoot<T>(R: PolynomialRing<T>, g: MultivariatePolynomial<T>, q: bigint): MultivariatePolynomial<T> {
   const p = Number(R.field.characteristic);
   const e = q / R.field.characteristic;
   return R.fromTerms(
-    g.terms.map((t) => ({ exponents: t.exponents.map((x) => x / p), coefficient: e === 1n ? t.coefficient : power(R.field, t.coefficient, e) })),
+    g.terms.map((t) => ({ exponents: t.exponents.map((x) => x / p), coefficient: e === 1n ? t.coefficient : fieldPower(R.field, t.coefficient, e) })),
   );
 }
 

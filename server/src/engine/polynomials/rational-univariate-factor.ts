@@ -14,6 +14,7 @@
  * that no subset of at most half of the remaining factors divides is
  * irreducible; so every factor returned is proven irreducible.
  */
+import { subsets } from '../subsets.js';
 import type { Field } from '../field.js';
 import { primeField } from '../prime-field.js';
 import { QQ, lcmBigInt, rational, type Rational } from '../rational.js';
@@ -65,20 +66,6 @@ function modularFactors(f: IntegerPolynomial, p: bigint): bigint[][] | undefined
   if (g.length !== 1) return undefined;
   const { factors } = factorOverFiniteField(Fp, p, denseMonic(Fp, image));
   return factors.map(({ factor }) => factor.map((c: unknown) => BigInt(Fp.format(c))));
-}
-
-/** Every k-subset of [0, n) in lexicographic order. */
-function* subsets(n: number, k: number): Generator<number[]> {
-  const s = Array.from({ length: k }, (_, i) => i);
-  if (k > n) return;
-  for (;;) {
-    yield s.slice();
-    let i = k - 1;
-    while (i >= 0 && s[i] === n - k + i) i--;
-    if (i < 0) return;
-    s[i]!++;
-    for (let j = i + 1; j < k; j++) s[j] = s[j - 1]! + 1;
-  }
 }
 
 /**
