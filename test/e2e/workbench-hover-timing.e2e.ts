@@ -71,7 +71,9 @@ function summary(samples: Sample[], phase: Sample['phase']) {
 }
 
 describe('hovers while a heavy statement evaluates', { timeout: 420_000 }, () => {
-  const fixture = heavyFixture();
+  // 150-digit entries: the minors alone then take about half a minute here (60 digits took 8 s once the
+  // presentation stopped building every label), long enough for the hovers sampled while it evaluates.
+  const fixture = heavyFixture({ digits: 150 });
   const hovered = fixture.planes[0]!;
   // The hover lists each coordinate with its label; the value must end there (no 1 → 12).
   const hoverPatterns = [
