@@ -10,14 +10,8 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { CodeLensRequest, DidOpenTextDocumentNotification, HoverRequest, MarkupContent, type PublishDiagnosticsParams } from 'vscode-languageserver-protocol/node';
 import { assertBundleIsFresh, ROOT } from '../support/bundles.js';
+import { positionOf } from './text-positions.js';
 import { startServerSession, type ServerSession } from './server-process.js';
-
-function positionOf(text: string, needle: string, offset = 0) {
-  const at = text.indexOf(needle) + offset;
-  assert.ok(at >= offset, needle);
-  const before = text.slice(0, at).split('\n');
-  return { line: before.length - 1, character: before[before.length - 1]!.length };
-}
 
 describe('Schubert classes and families in the editor', { timeout: 60_000 }, () => {
   let session: ServerSession;
@@ -60,7 +54,7 @@ describe('Schubert classes and families in the editor', { timeout: 60_000 }, () 
   test('[evaluator] the sliding arm: the false identity names t; the family hover is in polynomials of t', async () => {
     const { uri, text, published } = await openSample('sliding-arm-family.wedge', 'claim/equality');
     const claim = published.diagnostics.find((d) => d.code === 'claim/equality')!;
-    assert.match(claim.message, /differ at t = -?\d+/);
+    assert.match(String(claim.message), /differ at t = -?\d+/);
     assert.match(await hover(uri, text, 'subspace arm', 'subspace '.length), /QQ\(t\)/);
     const lenses = await session.connection.sendRequest(CodeLensRequest.type, { textDocument: { uri } });
     const line = positionOf(text, 'show degeneracy(bracket)').line;

@@ -26,11 +26,11 @@ import {
   type CompletionList,
   type DocumentSymbol,
   type Location,
-  type Position,
   type SemanticTokensLegend,
   type TextEdit,
 } from 'vscode-languageserver-protocol/node';
 import { assertBundleIsFresh } from '../support/bundles.js';
+import { positionAt, positionOf } from './text-positions.js';
 import { startServerSession, type ServerSession } from './server-process.js';
 
 const TEXT = [
@@ -44,20 +44,6 @@ const TEXT = [
   'show chart(L, 12)', // 7
   '',
 ].join('\n');
-
-/** The LSP position (0-based line, UTF-16 character) of `offset`, computed independently of the server. */
-function positionAt(text: string, offset: number): Position {
-  const before = text.slice(0, offset).split('\n');
-  return { line: before.length - 1, character: before[before.length - 1]!.length };
-}
-
-/** The position `index` characters into the `nth` occurrence (0-based) of `needle`. */
-function positionOf(text: string, needle: string, index = 0, nth = 0): Position {
-  let at = -1;
-  for (let i = 0; i <= nth; i++) at = text.indexOf(needle, at + 1);
-  assert.ok(at >= 0, `text contains ${JSON.stringify(needle)}`);
-  return positionAt(text, at + index);
-}
 
 let counter = 0;
 async function open(session: ServerSession, text: string): Promise<string> {

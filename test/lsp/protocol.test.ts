@@ -27,10 +27,10 @@ import {
   HoverRequest,
   MarkupContent,
   TextDocumentSyncKind,
-  type Position,
   type TextDocumentSyncOptions,
 } from 'vscode-languageserver-protocol/node';
 import { assertBundleIsFresh, ROOT } from '../support/bundles.js';
+import { positionAt, positionOf } from './text-positions.js';
 import { startServerSession, type ServerSession } from './server-process.js';
 
 // Two coordinate vectors of a 4-dimensional space span a plane: dim L = 2, so `claim dim L = 3` is
@@ -43,19 +43,6 @@ const FALSE_CLAIM = [
   'claim dim L = 3',
   '',
 ].join('\n');
-
-/** The LSP position (0-based line, UTF-16 character) of `offset`, computed independently of the server. */
-function positionAt(text: string, offset: number): Position {
-  const before = text.slice(0, offset).split('\n');
-  return { line: before.length - 1, character: before[before.length - 1]!.length };
-}
-
-/** The position of the `index`-th character of the first occurrence of `needle` (which must occur). */
-function positionOf(text: string, needle: string, index = 0): Position {
-  const at = text.indexOf(needle);
-  assert.ok(at >= 0, `sample text contains ${JSON.stringify(needle)}`);
-  return positionAt(text, at + index);
-}
 
 let documentCounter = 0;
 function freshUri(): string {
